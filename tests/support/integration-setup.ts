@@ -1,0 +1,2 @@
+// Filled in with the database harness.
+export {};
