@@ -1,0 +1,28 @@
+import { redirect } from "next/navigation";
+import type { ReactNode } from "react";
+import { AppShell } from "@/components/shell/app-shell";
+import { NotForThisAccount } from "@/components/shell/not-for-this-account";
+import { membershipsOf } from "@/lib/auth/roles";
+import { getSession } from "@/lib/auth/session";
+
+export default async function ShopLayout({ children }: { children: ReactNode }) {
+  const session = await getSession();
+  if (!session) redirect("/sign-in?next=/shop");
+  const shops = await membershipsOf({ userId: session.user.id });
+  if (shops.length === 0) return <NotForThisAccount area="shop workspace" home="/garage" />;
+  const owner = shops.some((s) => s.role === "owner");
+  return (
+    <AppShell
+      areaLabel={shops[0].shopName}
+      homeHref="/shop"
+      userName={session.user.name}
+      nav={[
+        { href: "/shop", label: "Passes", exact: true },
+        ...(owner ? [{ href: "/shop/profile", label: "Shop & staff" }] : []),
+        { href: "/garage", label: "My own garage" },
+      ]}
+    >
+      {children}
+    </AppShell>
+  );
+}

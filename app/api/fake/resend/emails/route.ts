@@ -1,0 +1,32 @@
+// The local fake of the Resend API's `POST /emails`, used by the resend SDK
+// when no real key is configured. It keeps each message in the outbox.
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import { storeFakeEmail } from "@/db/queries/outbox";
+import { usingFakeEmail } from "@/lib/env";
+
+const addresses = z.union([z.string(), z.array(z.string())]).transform((v) => (Array.isArray(v) ? v : [v]));
+
+const sendSchema = z.object({
+  from: z.string().min(1),
+  to: addresses,
+  subject: z.string().min(1),
+  html: z.string().optional(),
+  text: z.string().optional(),
+  headers: z.record(z.string(), z.string()).optional(),
+  tags: z.array(z.object({ name: z.string(), value: z.string() })).optional(),
+});
+
+export async function POST(req: Request) {
+  if (!usingFakeEmail()) return NextResponse.json({ message: "Not found" }, { status: 404 });
+  // The SDK sends `Authorization: Bearer <key>`; the real API refuses a missing key, so does the fake.
+  if (!req.headers.get("authorization")?.startsWith("Bearer ")) {
+    return NextResponse.json({ name: "missing_api_key", message: "Missing API key" }, { status: 401 });
+  }
+  const parsed = sendSchema.safeParse(await req.json().catch(() => null));
+  if (!parsed.success) {
+    return NextResponse.json({ name: "validation_error", message: parsed.error.issues[0]?.message ?? "Invalid" }, { status: 422 });
+  }
+  const id = await storeFakeEmail({ message: parsed.data });
+  return NextResponse.json({ id });
+}

@@ -1,0 +1,33 @@
+import type { Metadata, Viewport } from "next";
+import localFont from "next/font/local";
+import type { ReactNode } from "react";
+import "./globals.css";
+
+const sans = localFont({
+  src: "./fonts/atkinson-next.woff2",
+  variable: "--font-sans",
+  weight: "200 800",
+  display: "swap",
+});
+const mono = localFont({
+  src: "./fonts/jetbrains-mono.woff2",
+  variable: "--font-mono",
+  weight: "100 800",
+  display: "swap",
+});
+
+export const metadata: Metadata = {
+  title: { default: "Fourpatch — the tire logbook you own", template: "%s · Fourpatch" },
+  description:
+    "Keep every tire's date code and tread checks, see when each tire reaches its limit, and share a logbook with your shop for just as long as the service takes.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#1e625c" };
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+      <body className="min-h-dvh font-sans">{children}</body>
+    </html>
+  );
+}

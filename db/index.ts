@@ -1,0 +1,96 @@
+// The one database client of a process. PGlite in a data folder by default
+// (guarded by an exclusive lock), in memory for tests and the build phase,
+// and a real PostgreSQL server when DATABASE_URL is set.
+import fs from "node:fs";
+import path from "node:path";
+import { PGlite } from "@electric-sql/pglite";
+import { drizzle as drizzlePglite, type PgliteDatabase } from "drizzle-orm/pglite";
+import { drizzle as drizzlePg } from "drizzle-orm/node-postgres";
+import { migrate as migratePglite } from "drizzle-orm/pglite/migrator";
+import { migrate as migratePg } from "drizzle-orm/node-postgres/migrator";
+import pg from "pg";
+import { env } from "@/lib/env";
+import { acquireDataDirLock } from "./lock";
+import * as schema from "./schema";
+
+export type Database = PgliteDatabase<typeof schema>;
+export type Transaction = Parameters<Parameters<Database["transaction"]>[0]>[0];
+
+type Client =
+  | { kind: "pglite"; db: Database; pglite: PGlite; release: () => void; dataDir: string }
+  | { kind: "pg"; db: Database; pool: pg.Pool };
+
+const globalForDb = globalThis as unknown as { __fourpatchDb?: Client; __fourpatchMigrated?: Promise<void> };
+
+function dataDirFromEnv() {
+  // `next build` imports server modules while collecting page data; it must
+  // never open (or lock) the live data folder.
+  if (process.env.NEXT_PHASE === "phase-production-build") return "memory://";
+  return env().FOURPATCH_DATA_DIR;
+}
+
+function open(): Client {
+  const url = env().DATABASE_URL;
+  if (url && process.env.NEXT_PHASE !== "phase-production-build") {
+    const pool = new pg.Pool({ connectionString: url, max: 10 });
+    const db = drizzlePg({ client: pool, schema, casing: "snake_case" }) as unknown as Database;
+    return { kind: "pg", db, pool };
+  }
+  const dataDir = dataDirFromEnv();
+  let release = () => {};
+  let pglite: PGlite;
+  if (dataDir.startsWith("memory://")) {
+    pglite = new PGlite();
+  } else {
+    const dir = path.resolve(/*turbopackIgnore: true*/ dataDir);
+    release = acquireDataDirLock(dir);
+    fs.mkdirSync(dir, { recursive: true });
+    pglite = new PGlite(dir);
+  }
+  const db = drizzlePglite({ client: pglite, schema, casing: "snake_case" });
+  return { kind: "pglite", db, pglite, release, dataDir };
+}
+
+function client(): Client {
+  globalForDb.__fourpatchDb ??= open();
+  return globalForDb.__fourpatchDb;
+}
+
+/** The Drizzle database. Opens (and locks) the data folder on first use. */
+export const db: Database = new Proxy({} as Database, {
+  get(_target, prop, receiver) {
+    const real = client().db as unknown as Record<string | symbol, unknown>;
+    const value = Reflect.get(real, prop, receiver === db ? real : receiver);
+    return typeof value === "function" ? (value as (...a: unknown[]) => unknown).bind(real) : value;
+  },
+  has(_target, prop) {
+    return Reflect.has(client().db as object, prop);
+  },
+});
+
+export const migrationsFolder = path.join(process.cwd(), "db/migrations");
+
+/** Applies pending migrations once per process. */
+export function migrateDb(): Promise<void> {
+  globalForDb.__fourpatchMigrated ??= (async () => {
+    const c = client();
+    if (c.kind === "pg") await migratePg(c.db as never, { migrationsFolder });
+    else await migratePglite(c.db, { migrationsFolder });
+  })();
+  return globalForDb.__fourpatchMigrated;
+}
+
+/** Closes the client and releases the data-folder lock. */
+export async function closeDb() {
+  const c = globalForDb.__fourpatchDb;
+  if (!c) return;
+  globalForDb.__fourpatchDb = undefined;
+  globalForDb.__fourpatchMigrated = undefined;
+  if (c.kind === "pg") await c.pool.end();
+  else {
+    await c.pglite.close();
+    c.release();
+  }
+}
+
+export { schema };

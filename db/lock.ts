@@ -1,0 +1,74 @@
+// PGlite takes no lock on its data folder, and a second process that opens
+// the same folder silently loses committed writes. This exclusive lock file,
+// taken before PGlite opens, makes that impossible.
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+
+export class DataDirLockedError extends Error {
+  constructor(
+    readonly dataDir: string,
+    readonly holderPid: number,
+  ) {
+    super(
+      `The data folder ${dataDir} is in use by another Fourpatch process (PID ${holderPid}). ` +
+        `Stop that process first, or go through the running server (for example \`npm run reminders:run\`). ` +
+        `Nothing was written.`,
+    );
+    this.name = "DataDirLockedError";
+  }
+}
+
+export function lockPathFor(dataDir: string) {
+  return path.join(path.dirname(path.resolve(dataDir)), `.${path.basename(path.resolve(dataDir))}.lock`);
+}
+
+function isAlive(pid: number) {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    // EPERM means the process exists but belongs to someone else.
+    return (err as NodeJS.ErrnoException).code === "EPERM";
+  }
+}
+
+/** Takes the lock or throws DataDirLockedError. Returns a release function. */
+export function acquireDataDirLock(dataDir: string): () => void {
+  const lockPath = lockPathFor(dataDir);
+  fs.mkdirSync(path.dirname(lockPath), { recursive: true });
+  const body = JSON.stringify({ pid: process.pid, host: os.hostname(), since: new Date().toISOString() });
+
+  for (let attempt = 0; attempt < 2; attempt++) {
+    try {
+      fs.writeFileSync(lockPath, body, { flag: "wx" });
+      let released = false;
+      const release = () => {
+        if (released) return;
+        released = true;
+        try {
+          const holder = JSON.parse(fs.readFileSync(lockPath, "utf8")) as { pid: number };
+          if (holder.pid === process.pid) fs.unlinkSync(lockPath);
+        } catch {
+          // Already gone: nothing to release.
+        }
+      };
+      process.once("exit", release);
+      return release;
+    } catch (err) {
+      if ((err as NodeJS.ErrnoException).code !== "EEXIST") throw err;
+      let holderPid = 0;
+      try {
+        holderPid = (JSON.parse(fs.readFileSync(lockPath, "utf8")) as { pid: number }).pid;
+      } catch {
+        // An unreadable lock is treated as stale below.
+      }
+      if (holderPid && holderPid !== process.pid && isAlive(holderPid)) {
+        throw new DataDirLockedError(path.resolve(dataDir), holderPid);
+      }
+      // The holder died without cleaning up: remove the stale lock and retry once.
+      fs.rmSync(lockPath, { force: true });
+    }
+  }
+  throw new DataDirLockedError(path.resolve(dataDir), 0);
+}

@@ -1,0 +1,54 @@
+import "server-only";
+import { desc, eq, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { fakeOutbox } from "@/db/schema";
+
+export async function storeFakeEmail({
+  message,
+}: {
+  message: {
+    from: string;
+    to: string[];
+    subject: string;
+    html?: string;
+    text?: string;
+    headers?: Record<string, string>;
+    tags?: { name: string; value: string }[];
+  };
+}): Promise<string> {
+  const [row] = await db
+    .insert(fakeOutbox)
+    .values({
+      fromAddress: message.from,
+      toAddresses: message.to.map((a) => a.toLowerCase()),
+      subject: message.subject,
+      html: message.html,
+      text: message.text,
+      headers: message.headers,
+      tags: message.tags,
+    })
+    .returning({ id: fakeOutbox.id });
+  return row.id;
+}
+
+export async function listFakeEmails({ to, limit = 100 }: { to?: string; limit?: number }) {
+  const where = to ? sql`${fakeOutbox.toAddresses} @> ${JSON.stringify([to.toLowerCase()])}::jsonb` : undefined;
+  return db
+    .select({
+      id: fakeOutbox.id,
+      fromAddress: fakeOutbox.fromAddress,
+      toAddresses: fakeOutbox.toAddresses,
+      subject: fakeOutbox.subject,
+      tags: fakeOutbox.tags,
+      createdAt: fakeOutbox.createdAt,
+    })
+    .from(fakeOutbox)
+    .where(where)
+    .orderBy(desc(fakeOutbox.createdAt))
+    .limit(limit);
+}
+
+export async function getFakeEmail({ id }: { id: string }) {
+  const [row] = await db.select().from(fakeOutbox).where(eq(fakeOutbox.id, id)).limit(1);
+  return row ?? null;
+}

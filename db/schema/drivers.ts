@@ -1,0 +1,95 @@
+// Per-driver preferences, plan, reminder feed tokens, deliveries, and the
+// local e-mail fake's outbox.
+import { boolean, date, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { user } from "./auth";
+
+const tz = (name: string) => timestamp(name, { withTimezone: true });
+
+export const unitSystem = pgEnum("unit_system", ["metric", "imperial"]);
+export const pressureUnit = pgEnum("pressure_unit", ["kpa", "psi", "bar"]);
+export const plan = pgEnum("plan", ["free", "plus"]);
+
+export const driverProfile = pgTable("driver_profile", {
+  userId: text("user_id")
+    .primaryKey()
+    .references(() => user.id, { onDelete: "cascade" }),
+  units: unitSystem("units").notNull().default("metric"),
+  pressureUnit: pressureUnit("pressure_unit").notNull().default("kpa"),
+  timezone: text("timezone").notNull().default("UTC"),
+  // Key of a row in the depth-limit table of lib/tires (e.g. "eu", "us").
+  jurisdiction: text("jurisdiction").notNull().default("eu"),
+  plan: plan("plan").notNull().default("free"),
+  // Reminder settings, validated by lib/validation/reminders.ts.
+  reminderSettings: jsonb("reminder_settings").notNull().default({}),
+  emailReminders: boolean("email_reminders").notNull().default(false),
+  createdAt: tz("created_at").notNull().defaultNow(),
+  updatedAt: tz("updated_at").notNull().defaultNow(),
+});
+
+export const reminderFeed = pgTable(
+  "reminder_feed",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    // SHA-256 of the secret token; the token itself is never stored.
+    tokenHash: text("token_hash").notNull().unique(),
+    createdAt: tz("created_at").notNull().defaultNow(),
+    revokedAt: tz("revoked_at"),
+    lastFetchedAt: tz("last_fetched_at"),
+  },
+  (t) => [index("reminder_feed_user_idx").on(t.userId)],
+);
+
+/** One row per reminder sent: the unique key makes retries harmless. */
+export const reminderDelivery = pgTable(
+  "reminder_delivery",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    reminderId: text("reminder_id").notNull(),
+    dueOn: date("due_on").notNull(),
+    channel: text("channel").notNull().default("email"),
+    status: text("status").notNull().default("pending"),
+    attempts: integer("attempts").notNull().default(0),
+    providerMessageId: text("provider_message_id"),
+    createdAt: tz("created_at").notNull().defaultNow(),
+    sentAt: tz("sent_at"),
+  },
+  (t) => [uniqueIndex("reminder_delivery_uq").on(t.userId, t.reminderId, t.dueOn, t.channel)],
+);
+
+/** Per-kind e-mail opt-outs, reachable from a link without signing in. */
+export const emailOptOut = pgTable(
+  "email_opt_out",
+  {
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    kind: text("kind").notNull(),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("email_opt_out_uq").on(t.userId, t.kind)],
+);
+
+/** The local e-mail fake keeps every message here (never used with a real key). */
+export const fakeOutbox = pgTable(
+  "fake_outbox",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    fromAddress: text("from_address").notNull(),
+    toAddresses: jsonb("to_addresses").$type<string[]>().notNull(),
+    subject: text("subject").notNull(),
+    html: text("html"),
+    text: text("text"),
+    tags: jsonb("tags").$type<{ name: string; value: string }[]>(),
+    headers: jsonb("headers").$type<Record<string, string>>(),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [index("fake_outbox_created_idx").on(t.createdAt)],
+);
+
+export type DriverProfile = typeof driverProfile.$inferSelect;

@@ -1,0 +1,4 @@
+export * from "./auth";
+export * from "./drivers";
+export * from "./logbook";
+export * from "./shops";

@@ -1,0 +1,224 @@
+// The driver's logbook: vehicles, odometer history, tire sets, tires, tread
+// checks with their per-tire readings, service entries and attachments.
+// Distances are stored in km and depths in mm; units are a display choice.
+import {
+  boolean,
+  date,
+  doublePrecision,
+  index,
+  integer,
+  pgEnum,
+  pgTable,
+
+  text,
+  timestamp,
+  uuid,
+} from "drizzle-orm/pg-core";
+import { organization, user } from "./auth";
+
+const tz = (name: string) => timestamp(name, { withTimezone: true });
+
+export const odometerUnit = pgEnum("odometer_unit", ["km", "mi"]);
+export const setKind = pgEnum("set_kind", ["summer", "all_season", "all_weather", "winter"]);
+export const setState = pgEnum("set_state", ["mounted", "stored", "retired"]);
+export const tirePosition = pgEnum("tire_position", ["front_left", "front_right", "rear_left", "rear_right", "spare"]);
+export const measuredBy = pgEnum("measured_by", ["driver", "shop"]);
+export const measureMethod = pgEnum("measure_method", ["gauge", "coin"]);
+export const serviceKind = pgEnum("service_kind", [
+  "fitting",
+  "seasonal_swap",
+  "rotation",
+  "balancing",
+  "alignment",
+  "puncture_repair",
+  "inspection",
+]);
+export const attachmentKind = pgEnum("attachment_kind", ["receipt", "photo", "document"]);
+
+export const vehicle = pgTable(
+  "vehicle",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    ownerId: text("owner_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    nickname: text("nickname").notNull(),
+    make: text("make").notNull(),
+    model: text("model").notNull(),
+    year: integer("year"),
+    vin: text("vin"),
+    plate: text("plate"),
+    placardFrontSize: text("placard_front_size"),
+    placardRearSize: text("placard_rear_size"),
+    placardFrontKpa: doublePrecision("placard_front_kpa"),
+    placardRearKpa: doublePrecision("placard_rear_kpa"),
+    odometerUnit: odometerUnit("odometer_unit").notNull().default("km"),
+    createdAt: tz("created_at").notNull().defaultNow(),
+    updatedAt: tz("updated_at").notNull().defaultNow(),
+  },
+  (t) => [index("vehicle_owner_id_idx").on(t.ownerId)],
+);
+
+export const odometerReading = pgTable(
+  "odometer_reading",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicle.id, { onDelete: "cascade" }),
+    readOn: date("read_on").notNull(),
+    odometerKm: doublePrecision("odometer_km").notNull(),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [index("odometer_reading_vehicle_idx").on(t.vehicleId, t.readOn)],
+);
+
+export const tireSet = pgTable(
+  "tire_set",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicle.id, { onDelete: "cascade" }),
+    label: text("label"),
+    kind: setKind("kind").notNull(),
+    size: text("size").notNull(),
+    loadIndex: integer("load_index"),
+    speedSymbol: text("speed_symbol"),
+    purchasedOn: date("purchased_on"),
+    priceCents: integer("price_cents"),
+    currency: text("currency").notNull().default("EUR"),
+    seller: text("seller"),
+    state: setState("state").notNull().default("mounted"),
+    storageLocation: text("storage_location"),
+    // Per-set overrides of the defaults of the computation core.
+    depthLimitMm: doublePrecision("depth_limit_mm"),
+    ageReplaceYears: doublePrecision("age_replace_years"),
+    ageWatchYears: doublePrecision("age_watch_years"),
+    fittedByShopId: text("fitted_by_shop_id").references(() => organization.id, { onDelete: "set null" }),
+    createdAt: tz("created_at").notNull().defaultNow(),
+    updatedAt: tz("updated_at").notNull().defaultNow(),
+  },
+  (t) => [index("tire_set_vehicle_idx").on(t.vehicleId), index("tire_set_state_idx").on(t.vehicleId, t.state)],
+);
+
+export const tire = pgTable(
+  "tire",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    setId: uuid("set_id")
+      .notNull()
+      .references(() => tireSet.id, { onDelete: "cascade" }),
+    position: tirePosition("position").notNull(),
+    // The code exactly as the driver typed it, and what it decoded to.
+    dotCode: text("dot_code"),
+    dotWeek: integer("dot_week"),
+    dotYear: integer("dot_year"),
+    dotWeekStart: date("dot_week_start"),
+    dotPrecision: text("dot_precision"),
+    newDepthMm: doublePrecision("new_depth_mm"),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [index("tire_set_id_idx").on(t.setId)],
+);
+
+export const serviceEntry = pgTable(
+  "service_entry",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicle.id, { onDelete: "cascade" }),
+    setId: uuid("set_id").references(() => tireSet.id, { onDelete: "set null" }),
+    kind: serviceKind("kind").notNull(),
+    performedOn: date("performed_on").notNull(),
+    odometerKm: doublePrecision("odometer_km"),
+    costCents: integer("cost_cents"),
+    notes: text("notes"),
+    shopId: text("shop_id").references(() => organization.id, { onDelete: "set null" }),
+    authorUserId: text("author_user_id").references(() => user.id, { onDelete: "set null" }),
+    passId: uuid("pass_id"),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [index("service_entry_vehicle_idx").on(t.vehicleId, t.performedOn), index("service_entry_shop_idx").on(t.shopId)],
+);
+
+export const treadCheck = pgTable(
+  "tread_check",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicle.id, { onDelete: "cascade" }),
+    setId: uuid("set_id")
+      .notNull()
+      .references(() => tireSet.id, { onDelete: "cascade" }),
+    checkedOn: date("checked_on").notNull(),
+    odometerKm: doublePrecision("odometer_km"),
+    measuredBy: measuredBy("measured_by").notNull().default("driver"),
+    method: measureMethod("method").notNull().default("gauge"),
+    shopId: text("shop_id").references(() => organization.id, { onDelete: "set null" }),
+    authorUserId: text("author_user_id").references(() => user.id, { onDelete: "set null" }),
+    serviceEntryId: uuid("service_entry_id").references(() => serviceEntry.id, { onDelete: "set null" }),
+    passId: uuid("pass_id"),
+    notes: text("notes"),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [index("tread_check_vehicle_idx").on(t.vehicleId, t.checkedOn), index("tread_check_set_idx").on(t.setId)],
+);
+
+export const treadReading = pgTable(
+  "tread_reading",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    checkId: uuid("check_id")
+      .notNull()
+      .references(() => treadCheck.id, { onDelete: "cascade" }),
+    tireId: uuid("tire_id")
+      .notNull()
+      .references(() => tire.id, { onDelete: "cascade" }),
+    innerMm: doublePrecision("inner_mm"),
+    centreMm: doublePrecision("centre_mm"),
+    outerMm: doublePrecision("outer_mm"),
+    pressureKpa: doublePrecision("pressure_kpa"),
+    // A coin reading is only a bracket, never a measurement.
+    approximate: boolean("approximate").notNull().default(false),
+  },
+  (t) => [index("tread_reading_check_idx").on(t.checkId), index("tread_reading_tire_idx").on(t.tireId)],
+);
+
+export const attachment = pgTable(
+  "attachment",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    ownerId: text("owner_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicle.id, { onDelete: "cascade" }),
+    setId: uuid("set_id").references(() => tireSet.id, { onDelete: "cascade" }),
+    serviceEntryId: uuid("service_entry_id").references(() => serviceEntry.id, { onDelete: "cascade" }),
+    kind: attachmentKind("kind").notNull(),
+    fileName: text("file_name").notNull(),
+    storedName: text("stored_name").notNull().unique(),
+    mimeType: text("mime_type").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    uploadedByUserId: text("uploaded_by_user_id").references(() => user.id, { onDelete: "set null" }),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [
+    index("attachment_vehicle_idx").on(t.vehicleId),
+    index("attachment_set_idx").on(t.setId),
+    index("attachment_service_idx").on(t.serviceEntryId),
+  ],
+);
+
+export type Vehicle = typeof vehicle.$inferSelect;
+export type TireSet = typeof tireSet.$inferSelect;
+export type Tire = typeof tire.$inferSelect;
+export type TreadCheck = typeof treadCheck.$inferSelect;
+export type TreadReading = typeof treadReading.$inferSelect;
+export type ServiceEntry = typeof serviceEntry.$inferSelect;
+export type Attachment = typeof attachment.$inferSelect;
+

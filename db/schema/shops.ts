@@ -1,0 +1,88 @@
+// Shops (better-auth organizations) and the passes drivers give them.
+import { index, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { organization, user } from "./auth";
+import { vehicle } from "./logbook";
+
+const tz = (name: string) => timestamp(name, { withTimezone: true });
+
+export const passScope = pgEnum("pass_scope", ["view", "view_add"]);
+
+export const shopProfile = pgTable(
+  "shop_profile",
+  {
+    shopId: text("shop_id")
+      .primaryKey()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    town: text("town").notNull(),
+    address: text("address"),
+    phone: text("phone"),
+    email: text("email"),
+    about: text("about"),
+    createdAt: tz("created_at").notNull().defaultNow(),
+    updatedAt: tz("updated_at").notNull().defaultNow(),
+  },
+  (t) => [index("shop_profile_town_idx").on(t.town)],
+);
+
+export const shopPass = pgTable(
+  "shop_pass",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    driverId: text("driver_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    shopId: text("shop_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    scope: passScope("scope").notNull(),
+    startsAt: tz("starts_at").notNull(),
+    endsAt: tz("ends_at").notNull(),
+    revokedAt: tz("revoked_at"),
+    note: text("note"),
+    // Set once the "pass ended" e-mail went out, so it goes out once.
+    endNoticeSentAt: tz("end_notice_sent_at"),
+    createdAt: tz("created_at").notNull().defaultNow(),
+  },
+  (t) => [
+    index("shop_pass_driver_idx").on(t.driverId),
+    index("shop_pass_shop_idx").on(t.shopId, t.endsAt),
+  ],
+);
+
+export const shopPassVehicle = pgTable(
+  "shop_pass_vehicle",
+  {
+    passId: uuid("pass_id")
+      .notNull()
+      .references(() => shopPass.id, { onDelete: "cascade" }),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicle.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.passId, t.vehicleId] }), index("shop_pass_vehicle_vehicle_idx").on(t.vehicleId)],
+);
+
+/** Every read and write under a pass, shown to the driver. */
+export const accessLog = pgTable(
+  "access_log",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    passId: uuid("pass_id")
+      .notNull()
+      .references(() => shopPass.id, { onDelete: "cascade" }),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicle.id, { onDelete: "cascade" }),
+    shopId: text("shop_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    actorUserId: text("actor_user_id").references(() => user.id, { onDelete: "set null" }),
+    actorName: text("actor_name").notNull(),
+    action: text("action").notNull(),
+    detail: text("detail"),
+    at: tz("at").notNull().defaultNow(),
+  },
+  (t) => [index("access_log_vehicle_idx").on(t.vehicleId, t.at), index("access_log_pass_idx").on(t.passId)],
+);
+
+export type ShopPass = typeof shopPass.$inferSelect;

@@ -1,0 +1,36 @@
+import "server-only";
+// One wrapper for every server action: session, role, safe-parse of the
+// input, and a discriminated result with per-field errors. Server actions
+// are public endpoints, so the checks run here every time.
+import type { z } from "zod";
+import { getSession, type Session } from "@/lib/auth/session";
+import { requireAdmin, requireSession } from "@/lib/auth/roles";
+import { toAppError, type FieldErrors } from "@/lib/errors";
+import { fieldErrors } from "@/lib/validation/fields";
+
+export type ActionResult<T = undefined> =
+  | { status: "ok"; data: T; message?: string }
+  | { status: "error"; message: string; fields?: FieldErrors };
+
+type Role = "signed-in" | "admin";
+
+export function action<S extends z.ZodType, T>(
+  schema: S,
+  options: { role?: Role },
+  fn: (input: z.output<S>, ctx: { session: Session }) => Promise<T>,
+) {
+  return async (raw: z.input<S> | FormData): Promise<ActionResult<T>> => {
+    try {
+      const session = await getSession();
+      const s = options.role === "admin" ? requireAdmin(session) : requireSession(session);
+      const input = raw instanceof FormData ? Object.fromEntries(raw.entries()) : raw;
+      const parsed = schema.safeParse(input);
+      if (!parsed.success) return { status: "error", message: "Some fields need attention.", fields: fieldErrors(parsed.error) };
+      const data = await fn(parsed.data, { session: s });
+      return { status: "ok", data };
+    } catch (err) {
+      const e = toAppError(err);
+      return { status: "error", message: e.safeMessage, fields: e.fields };
+    }
+  };
+}

@@ -1,0 +1,7 @@
+"use client";
+import { adminClient, organizationClient } from "better-auth/client/plugins";
+import { createAuthClient } from "better-auth/react";
+
+export const authClient = createAuthClient({
+  plugins: [organizationClient(), adminClient()],
+});

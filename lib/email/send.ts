@@ -1,0 +1,74 @@
+import "server-only";
+// Every e-mail goes through the resend SDK. Without a real key the SDK is
+// pointed at the app's own fake of the Resend API, which keeps each message
+// in an outbox page; the switch is configuration only.
+import { render } from "@react-email/render";
+import type { ReactElement } from "react";
+import { Resend } from "resend";
+import { appUrl, env, usingFakeEmail } from "@/lib/env";
+
+export const FAKE_RESEND_KEY = "re_local_fake";
+
+export function fakeResendBaseUrl() {
+  return `${appUrl()}/api/fake/resend`;
+}
+
+let client: Resend | undefined;
+
+function resend() {
+  if (!client) {
+    const e = env();
+    client = usingFakeEmail()
+      ? new Resend(FAKE_RESEND_KEY, { baseUrl: fakeResendBaseUrl() })
+      : new Resend(e.RESEND_API_KEY, e.RESEND_BASE_URL ? { baseUrl: e.RESEND_BASE_URL } : undefined);
+  }
+  return client;
+}
+
+export type EmailKind =
+  | "welcome"
+  | "password-reset"
+  | "invitation"
+  | "reminder-digest"
+  | "pass-received"
+  | "pass-ended"
+  | "shop-entry"
+  | "plus-receipt";
+
+export type SendEmailInput = {
+  to: string | string[];
+  subject: string;
+  react: ReactElement;
+  kind: EmailKind;
+  /** Per-kind unsubscribe link, added as a List-Unsubscribe header. */
+  unsubscribeUrl?: string;
+};
+
+export type SendEmailResult = { ok: true; id: string } | { ok: false; error: string };
+
+export async function sendEmail(input: SendEmailInput): Promise<SendEmailResult> {
+  // The seed script runs with no server to receive the fake's messages.
+  if (process.env.FOURPATCH_EMAIL_DELIVERY === "skip") return { ok: false, error: "E-mail delivery is switched off." };
+  const [html, text] = await Promise.all([render(input.react), render(input.react, { plainText: true })]);
+  const headers: Record<string, string> = {};
+  if (input.unsubscribeUrl) {
+    headers["List-Unsubscribe"] = `<${input.unsubscribeUrl}>`;
+    headers["List-Unsubscribe-Post"] = "List-Unsubscribe=One-Click";
+  }
+  const { data, error } = await resend().emails.send({
+    from: env().EMAIL_FROM,
+    to: Array.isArray(input.to) ? input.to : [input.to],
+    subject: input.subject,
+    html,
+    text,
+    headers,
+    tags: [{ name: "kind", value: input.kind }],
+  });
+  if (error || !data) return { ok: false, error: error?.message ?? "The e-mail service gave no answer." };
+  return { ok: true, id: data.id };
+}
+
+/** Only for tests: drop the cached SDK client after changing the environment. */
+export function resetEmailClientForTests() {
+  client = undefined;
+}
