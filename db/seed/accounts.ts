@@ -4,28 +4,11 @@ import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { driverProfile, member, organization, shopProfile, user } from "@/db/schema";
 import { auth } from "@/lib/auth/server";
+import { DEMO_PASSWORD, DEMO_SHOP, demoAccounts } from "./demo-accounts";
 
-export const DEMO_PASSWORD = "tread-carefully-26";
-
-export const demoAccounts = {
-  ada: { name: "Ada Renwick", email: "ada@renwick.test", role: "driver (Plus plan)" },
-  tomas: { name: "Tomas Renwick", email: "tomas@renwick.test", role: "driver (Free plan)" },
-  wren: { name: "Wren Halloway", email: "wren@quillby-tread.test", role: "shop owner" },
-  jo: { name: "Jo Marsh", email: "jo@quillby-tread.test", role: "technician" },
-  ops: { name: "Fourpatch Operations", email: "ops@fourpatch.test", role: "admin" },
-} as const;
+export { DEMO_PASSWORD, DEMO_SHOP, demoAccounts };
 
 export type DemoIds = { -readonly [K in keyof typeof demoAccounts]: string } & { shopId: string };
-
-export const DEMO_SHOP = {
-  id: "shop_quillby_tread_works",
-  name: "Quillby Tread Works",
-  slug: "quillby-tread-works",
-  town: "Quillby Ford",
-  address: "4 Kettle Lane, Quillby Ford",
-  phone: "+00 555 0142",
-  email: "desk@quillby-tread.test",
-};
 
 async function ensureUser(name: string, email: string): Promise<string> {
   const [existing] = await db.select({ id: user.id }).from(user).where(eq(user.email, email)).limit(1);

@@ -1,0 +1,106 @@
+import { expect, test } from "@playwright/test";
+import { demoAccounts } from "../../db/seed/demo-accounts";
+import { openNewestMail, SessionPages } from "./pages/session";
+
+test.describe("accounts and roles", () => {
+  test("the landing page says what Fourpatch does and carries the safety caution", async ({ page }) => {
+    await page.goto("/");
+    await expect(page.getByRole("heading", { level: 1 })).toContainText("Four patches of rubber");
+    await expect(page.getByText("a qualified tire technician decide").first()).toBeVisible();
+  });
+
+  test("a new driver signs up and lands in an empty garage", async ({ page }) => {
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Nell Brightwater");
+    await page.getByLabel("E-mail").fill(`nell-${Date.now()}@example.test`);
+    await page.getByLabel("Password").fill("short");
+    await page.getByRole("button", { name: "Create my logbook" }).click();
+    await expect(page.getByText("Use at least 10 characters.")).toBeVisible();
+    await page.getByLabel("Password").fill("a-long-enough-password");
+    await page.getByRole("button", { name: "Create my logbook" }).click();
+    await expect(page).toHaveURL(/\/garage$/);
+    await expect(page.getByRole("heading", { name: "Nell's garage" })).toBeVisible();
+  });
+
+  for (const [who, home] of [
+    ["ada", "/garage"],
+    ["tomas", "/garage"],
+    ["wren", "/shop"],
+    ["jo", "/shop"],
+    ["ops", "/admin"],
+  ] as const) {
+    test(`demo account ${who} (${demoAccounts[who].role}) lands on ${home}`, async ({ page }) => {
+      await new SessionPages(page).signInAndLand(demoAccounts[who].email, home);
+    });
+  }
+
+  test("a wrong password is refused with a clear message", async ({ page }) => {
+    await new SessionPages(page).signIn(demoAccounts.ada.email, "not-the-password");
+    await expect(page.getByRole("alert")).toContainText("do not match");
+    await expect(page).toHaveURL(/\/sign-in/);
+  });
+
+  test("signed out, every signed-in area redirects to sign-in", async ({ page }) => {
+    for (const path of ["/garage", "/shop", "/admin"]) {
+      await page.goto(path);
+      await expect(page).toHaveURL(/\/sign-in\?next=/);
+    }
+  });
+
+  test("each area refuses the other roles, in the page and on direct requests", async ({ page, request }) => {
+    const session = new SessionPages(page);
+    await session.signInAndLand(demoAccounts.tomas.email, "/garage");
+    for (const path of ["/shop", "/admin"]) {
+      await page.goto(path);
+      await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
+    }
+    // The same with the browser's cookie but no browser: the server decides.
+    const cookies = (await page.context().cookies()).map((c) => `${c.name}=${c.value}`).join("; ");
+    const admin = await request.get("/admin", { headers: { cookie: cookies } });
+    const html = await admin.text();
+    expect(html).toContain("Not for this account");
+    expect(html).not.toContain(demoAccounts.ops.email);
+    await session.signOut();
+
+    await session.signInAndLand(demoAccounts.jo.email, "/shop");
+    await page.goto("/admin");
+    await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
+    await session.signOut();
+
+    await session.signInAndLand(demoAccounts.ops.email, "/admin");
+    await expect(page.getByRole("cell", { name: demoAccounts.ada.email })).toBeVisible();
+    await page.goto("/shop");
+    await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
+  });
+
+  test("a driver resets a forgotten password through the e-mail in the outbox", async ({ page }) => {
+    const email = `reset-${Date.now()}@example.test`;
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Orla Fenwick");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("the-first-password");
+    await page.getByRole("button", { name: "Create my logbook" }).click();
+    await expect(page).toHaveURL(/\/garage$/);
+    await new SessionPages(page).signOut();
+
+    await page.goto("/forgot-password");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByRole("button", { name: "Send me a reset link" }).click();
+    await expect(page.getByText("Check your inbox")).toBeVisible();
+
+    await openNewestMail(page, email, "Choose a new Fourpatch password");
+    const link = await page.frameLocator("iframe").getByRole("link", { name: "Choose a new password" }).getAttribute("href");
+    expect(link).toContain("/reset-password");
+    await page.goto(link!);
+    await expect(page).toHaveURL(/\/reset-password\?token=/);
+    await page.getByLabel("New password", { exact: true }).fill("the-second-password");
+    await page.getByLabel("New password again").fill("the-second-password");
+    await page.getByRole("button", { name: "Save the new password" }).click();
+    await expect(page).toHaveURL(/\/sign-in/);
+
+    const session = new SessionPages(page);
+    await session.signIn(email, "the-first-password");
+    await expect(page.getByRole("alert")).toBeVisible();
+    await session.signInAndLand(email, "/garage");
+  });
+});
