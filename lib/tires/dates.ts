@@ -64,11 +64,11 @@ export function addDays(iso: string, days: number): string {
 
 /** Whole calendar years, months and days from `from` to `to` (to ≥ from). */
 export function calendarDifference(from: string, to: string): { years: number; months: number; days: number } {
-  const [fy, fm, fd] = from.split("-").map(Number);
-  const [ty, tm, td] = to.split("-").map(Number);
+  const [fy, fm] = from.split("-").map(Number);
+  const [ty, tm] = to.split("-").map(Number);
   let months = (ty - fy) * 12 + (tm - fm);
-  if (td < fd) months -= 1;
-  // Re-anchor on the month boundary so the day count is what a calendar shows.
+  // Same month-end fallback as addMonths, so 29 Feb + 1 year is a full year on 28 Feb, as the age dates say.
+  if (addMonths(from, months) > to) months -= 1;
   const anchor = addMonths(from, months);
   const days = (toDayNumber(to) as number) - (toDayNumber(anchor) as number);
   return { years: Math.floor(months / 12), months: months % 12, days };
