@@ -49,7 +49,7 @@ const UNREADABLE =
 
 const METRIC_HEAD = /^(P|LT|T|ST)?(\d{3})\/(\d{2})(ZR|R|D|B|-)(\d{2}(?:\.5)?)/;
 const FLOTATION_HEAD = /^(\d{2}(?:\.\d{1,2})?)X(\d{1,2}(?:\.\d{1,2})?)(R|D|B|-)(\d{2}(?:\.5)?)/;
-const SERVICE = /^(\()?(?:(\d{2,3})(?:\/(\d{2,3}))?)?([A-Z])?(\))?$/;
+const SERVICE = /^(\()?(?:(\d{1,3})(?:\/(\d{1,3}))?)?([A-Z])?(\))?$/;
 
 export function parseTireSize(input: unknown): Result<{ size: TireSize }, SizeErrorCode> {
   if (typeof input !== "string") return fail("not-text", UNREADABLE);
