@@ -269,7 +269,7 @@ export function computeReminders(
             severity: severityFor(first.date, today, s.planLeadMonths),
             overdue: first.date < today,
             explanation: withCaution(
-              `The first tire of this set should reach the ${round1(limit.mm)} mm limit (${limit.source}) around ${Math.round(first.odo).toLocaleString("en-US")} km; the date is ${how}.`,
+              `The first tire of this set should reach the ${round1(limit.mm)} mm limit (${limit.source}) around ${km(first.odo)} km; the date is ${how}.`,
             ),
           });
         }
@@ -297,12 +297,12 @@ export function computeReminders(
           ...base,
           id: reminderId(vehicle.id, set.id, "rotation-due"),
           kind: "rotation-due",
-          subject: `${label}: rotation due at ${Math.round(dueKm).toLocaleString("en-US")} km`,
+          subject: `${label}: rotation due at ${km(dueKm)} km`,
           date,
           severity: date < today ? "watch" : "info",
           overdue: date < today,
           explanation: withCaution(
-            `Tires are commonly rotated every ${Math.round(s.rotationIntervalKm).toLocaleString("en-US")} km or as the vehicle's manual says; at about ${Math.round(rate.kmPerDay)} km a day this falls around ${date}.`,
+            `Tires are commonly rotated every ${km(s.rotationIntervalKm)} km or as the vehicle's manual says; at about ${Math.round(rate.kmPerDay)} km a day this falls around ${date}.`,
           ),
         });
       }
@@ -332,6 +332,11 @@ export function computeReminders(
   }
   items.sort((a, b) => a.date.localeCompare(b.date) || a.id.localeCompare(b.id));
   return { ok: true, items, skipped };
+}
+
+/** Thousands with commas, without depending on the runtime's locale data. */
+function km(n: number): string {
+  return String(Math.round(n)).replace(/\B(?=(\d{3})+(?!\d))/g, ",");
 }
 
 function round1(n: number): number {
