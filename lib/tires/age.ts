@@ -93,8 +93,9 @@ const AGE_BASIS =
 export function ageCondition(
   input: AgeConditionInput,
 ): Result<AgeConditionOk, "bad-date" | "bad-today" | "before-manufacture" | "bad-kind" | "bad-threshold"> {
-  const base = AGE_THRESHOLDS[input?.kind];
-  if (!base) return fail("bad-kind", "Choose the kind of set: summer, all-season, all-weather or winter.");
+  // Membership first: indexing with an arbitrary value could hit "constructor" or throw on a null-prototype object.
+  if (!SET_KINDS.includes(input?.kind)) return fail("bad-kind", "Choose the kind of set: summer, all-season, all-weather or winter.");
+  const base = AGE_THRESHOLDS[input.kind];
   const age = tireAge(input.manufactureWeekStart, { today: input.today });
   if (!age.ok) return age;
   const t: AgeThresholds = { ...base, ...stripUndefined(input.overrides ?? {}) };

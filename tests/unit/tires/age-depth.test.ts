@@ -90,6 +90,10 @@ describe("age condition — common practice [practice] (trade-facts §3)", () =>
       ageCondition({ manufactureWeekStart: start, kind: "summer", today: "2020-01-01", overrides: { replaceYears: Number.NaN } }),
     ).toMatchObject({ ok: false, code: "bad-threshold" });
     expect(ageCondition({ manufactureWeekStart: "x", kind: "summer", today: "2020-01-01" })).toMatchObject({ ok: false, code: "bad-date" });
+    // Values that are not kinds but would index an object: found by the no-throw property.
+    for (const kind of ["constructor", "__proto__", Object.create(null)]) {
+      expect(ageCondition({ manufactureWeekStart: start, kind, today: "2020-01-01" })).toMatchObject({ ok: false, code: "bad-kind" });
+    }
   });
 
   it("worseCondition takes the more severe", () => {
