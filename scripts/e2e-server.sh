@@ -10,6 +10,8 @@ export BETTER_AUTH_URL="http://localhost:$PORT"
 export BETTER_AUTH_SECRET="e2e-only-secret-5f1c0b8e9d7a4c3b2a190817"
 export FOURPATCH_DATA_DIR="tests/e2e/.data-$PORT"
 export FOURPATCH_SCHEDULER="off"
+# One browser signs in dozens of times a minute from one address; the limit itself is covered by an integration test.
+export FOURPATCH_AUTH_RATE_LIMIT="off"
 export CRON_SECRET="e2e-cron-secret"
 unset DATABASE_URL RESEND_API_KEY STRIPE_SECRET_KEY
 

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { Brand } from "./brand";
+import { SignOutButton } from "./sign-out-button";
 
 /** Shown when a signed-in account opens an area that is not its own. */
 export function NotForThisAccount({ area, home }: { area: string; home: string }) {
@@ -10,11 +11,12 @@ export function NotForThisAccount({ area, home }: { area: string; home: string }
       <p className="text-asphalt-700">
         The {area} is open to other kinds of accounts. You are signed in, but this account has no access here.
       </p>
-      <p>
+      <div className="flex flex-wrap items-center gap-4">
         <Link href={home} className="font-semibold text-groove-800">
           Go to your own home
         </Link>
-      </p>
+        <SignOutButton />
+      </div>
     </main>
   );
 }

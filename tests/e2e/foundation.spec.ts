@@ -36,7 +36,7 @@ test.describe("accounts and roles", () => {
 
   test("a wrong password is refused with a clear message", async ({ page }) => {
     await new SessionPages(page).signIn(demoAccounts.ada.email, "not-the-password");
-    await expect(page.getByRole("alert")).toContainText("do not match");
+    await expect(page.getByText("That e-mail and password do not match an account.")).toBeVisible();
     await expect(page).toHaveURL(/\/sign-in/);
   });
 
@@ -60,11 +60,13 @@ test.describe("accounts and roles", () => {
     const html = await admin.text();
     expect(html).toContain("Not for this account");
     expect(html).not.toContain(demoAccounts.ops.email);
+    await page.goto("/garage");
     await session.signOut();
 
     await session.signInAndLand(demoAccounts.jo.email, "/shop");
     await page.goto("/admin");
     await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
+    await page.goto("/shop");
     await session.signOut();
 
     await session.signInAndLand(demoAccounts.ops.email, "/admin");
@@ -100,7 +102,7 @@ test.describe("accounts and roles", () => {
 
     const session = new SessionPages(page);
     await session.signIn(email, "the-first-password");
-    await expect(page.getByRole("alert")).toBeVisible();
-    await session.signInAndLand(email, "/garage");
+    await expect(page.getByText("That e-mail and password do not match an account.")).toBeVisible();
+    await session.signInAndLand(email, "/garage", "the-second-password");
   });
 });

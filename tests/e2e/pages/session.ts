@@ -12,8 +12,8 @@ export class SessionPages {
     await this.page.getByRole("button", { name: "Sign in" }).click();
   }
 
-  async signInAndLand(email: string, path: string) {
-    await this.signIn(email);
+  async signInAndLand(email: string, path: string, password = DEMO_PASSWORD) {
+    await this.signIn(email, password);
     await expect(this.page).toHaveURL(new RegExp(`${path}$`));
   }
 
