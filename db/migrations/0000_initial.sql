@@ -98,7 +98,7 @@ CREATE TABLE "driver_profile" (
 	"units" "unit_system" DEFAULT 'metric' NOT NULL,
 	"pressure_unit" "pressure_unit" DEFAULT 'kpa' NOT NULL,
 	"timezone" text DEFAULT 'UTC' NOT NULL,
-	"jurisdiction" text DEFAULT 'eu' NOT NULL,
+	"jurisdiction" text DEFAULT 'EU' NOT NULL,
 	"plan" "plan" DEFAULT 'free' NOT NULL,
 	"reminder_settings" jsonb DEFAULT '{}'::jsonb NOT NULL,
 	"email_reminders" boolean DEFAULT false NOT NULL,

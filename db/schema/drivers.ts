@@ -16,8 +16,8 @@ export const driverProfile = pgTable("driver_profile", {
   units: unitSystem("units").notNull().default("metric"),
   pressureUnit: pressureUnit("pressure_unit").notNull().default("kpa"),
   timezone: text("timezone").notNull().default("UTC"),
-  // Key of a row in the depth-limit table of lib/tires (e.g. "eu", "us").
-  jurisdiction: text("jurisdiction").notNull().default("eu"),
+  // A `Jurisdiction` of lib/tires (e.g. "EU", "US", "FI"): picks the depth limit.
+  jurisdiction: text("jurisdiction").notNull().default("EU"),
   plan: plan("plan").notNull().default("free"),
   // Reminder settings, validated by lib/validation/reminders.ts.
   reminderSettings: jsonb("reminder_settings").notNull().default({}),
