@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { driverProfile, fakeOutbox } from "@/db/schema";
 import { GET as start } from "@/app/start/route";
-import { homeFor, isAdmin, membershipsOf, requireAdmin, requireShopMember } from "@/lib/auth/roles";
+import { homeFor, isAdmin, membershipsOf, requireAdmin, requireSession, requireShopMember } from "@/lib/auth/roles";
 import { sessionFromRequest } from "@/lib/auth/session";
 import { auth } from "@/lib/auth/server";
 import { makeShop, request, signUp } from "../../support/users";
@@ -87,10 +87,11 @@ describe("role checks on the server", () => {
   it("a disabled (banned) account is refused", async () => {
     const u = await signUp();
     const { user: userTable } = await import("@/db/schema");
+    const live = await sessionFromRequest(request("/", { as: u }));
+    expect(live?.user.id).toBe(u.id);
     await db.update(userTable).set({ banned: true }).where(eq(userTable.id, u.id));
     const s = await sessionFromRequest(request("/", { as: u }));
-    // better-auth ends the sessions of a banned user, or our check refuses it.
-    if (s) expect(() => requireAdmin(s)).toThrow();
-    else expect(s).toBeNull();
+    expect(() => requireSession(s)).toThrow(/disabled|sign in/i);
+    await expect(auth.api.signInEmail({ body: { email: u.email, password: "correct-horse-battery" } })).rejects.toThrow();
   });
 });
