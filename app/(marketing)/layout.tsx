@@ -9,9 +9,9 @@ export default function MarketingLayout({ children }: { children: ReactNode }) {
       <header className="border-b border-asphalt-200 bg-white">
         <div className="mx-auto flex max-w-6xl items-center justify-between gap-2 px-4 py-3">
           <Brand />
-          <nav aria-label="Site" className="flex items-center gap-1 sm:gap-3">
-            <Link href="/pricing" className="px-2 text-sm font-semibold text-asphalt-700">Pricing</Link>
-            <Link href="/sign-in" className="px-2 text-sm font-semibold text-asphalt-700">Sign in</Link>
+          <nav aria-label="Site" className="flex items-center gap-0.5 whitespace-nowrap sm:gap-3">
+            <Link href="/pricing" className="px-1.5 text-sm font-semibold text-asphalt-700 sm:px-2">Pricing</Link>
+            <Link href="/sign-in" className="px-1.5 text-sm font-semibold text-asphalt-700 sm:px-2">Sign in</Link>
             <Link href="/sign-up" className={buttonVariants({ size: "sm" })}>Start free</Link>
           </nav>
         </div>

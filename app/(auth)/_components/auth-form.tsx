@@ -43,6 +43,7 @@ function FormFields<T extends FieldValues>({ form, fields }: { form: ReturnType<
 export function SignInForm() {
   const router = useRouter();
   const next = useSafeNext();
+  const justReset = useSearchParams().get("reset") === "1";
   const [error, setError] = useState<string | null>(null);
   const form = useForm<z.infer<typeof signInSchema>>({ resolver: zodResolver(signInSchema) });
   return (
@@ -61,6 +62,7 @@ export function SignInForm() {
       })}
     >
       {error ? <Alert tone="error">{error}</Alert> : null}
+      {justReset && !error ? <Alert tone="success">Your new password is saved. Sign in with it.</Alert> : null}
       <FormFields
         form={form}
         fields={[
