@@ -105,4 +105,25 @@ test.describe("accounts and roles", () => {
     await expect(page.getByText("That e-mail and password do not match an account.")).toBeVisible();
     await session.signInAndLand(email, "/garage", "the-second-password");
   });
+
+  test("an operator disables an account, which can then no longer sign in", async ({ page }) => {
+    const email = `disable-${Date.now()}@example.test`;
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Quinn Harrowby");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("quinns-password-1");
+    await page.getByRole("button", { name: "Create my logbook" }).click();
+    await expect(page).toHaveURL(/\/garage$/);
+    const session = new SessionPages(page);
+    await session.signOut();
+
+    await session.signInAndLand(demoAccounts.ops.email, "/admin");
+    await page.getByRole("button", { name: "Disable Quinn Harrowby" }).click();
+    await expect(page.getByRole("button", { name: "Enable Quinn Harrowby" })).toBeVisible();
+    await session.signOut();
+
+    await session.signIn(email, "quinns-password-1");
+    await expect(page).toHaveURL(/\/sign-in/);
+    await expect(page.getByText(/do not match|disabled/)).toBeVisible();
+  });
 });

@@ -1,11 +1,13 @@
 import { listAccounts } from "@/db/queries/admin";
 import { PageHeader } from "@/components/ui/page-header";
 import { getSession } from "@/lib/auth/session";
+import { DisableToggle } from "./_components/disable-toggle";
 
 export const dynamic = "force-dynamic";
 
 export default async function AdminAccountsPage() {
-  const accounts = await listAccounts({ actor: await getSession() });
+  const session = await getSession();
+  const accounts = await listAccounts({ actor: session });
   return (
     <>
       <PageHeader title="Accounts" description={`${accounts.length} accounts`} />
@@ -19,6 +21,7 @@ export default async function AdminAccountsPage() {
               <th scope="col" className="px-3 py-2">Plan</th>
               <th scope="col" className="px-3 py-2">Shops</th>
               <th scope="col" className="px-3 py-2">State</th>
+              <th scope="col" className="px-3 py-2"><span className="sr-only">Action</span></th>
             </tr>
           </thead>
           <tbody>
@@ -30,6 +33,9 @@ export default async function AdminAccountsPage() {
                 <td className="px-3 py-2">{a.plan === "plus" ? "Plus" : "Free"}</td>
                 <td className="px-3 py-2">{a.shops}</td>
                 <td className="px-3 py-2">{a.banned ? "disabled" : "active"}</td>
+                <td className="px-3 py-2">
+                  {a.id === session?.user.id ? null : <DisableToggle userId={a.id} disabled={!!a.banned} name={a.name} />}
+                </td>
               </tr>
             ))}
           </tbody>

@@ -54,7 +54,13 @@ export function SignInForm() {
         setError(null);
         const { error } = await authClient.signIn.email(values);
         if (error) {
-          setError(error.status === 429 ? "Too many attempts. Wait a minute and try again." : "That e-mail and password do not match an account.");
+          setError(
+            error.status === 429
+              ? "Too many attempts. Wait a minute and try again."
+              : error.status === 403 && error.code === "BANNED_USER"
+                ? "This account is disabled. Write to the Fourpatch operators if you think this is a mistake."
+                : "That e-mail and password do not match an account.",
+          );
           return;
         }
         router.push(next);

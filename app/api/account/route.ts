@@ -1,0 +1,25 @@
+import { NextResponse } from "next/server";
+import { deleteAccount } from "@/db/queries/account";
+import { parseJson, route } from "@/lib/api/handler";
+import { auth } from "@/lib/auth/server";
+import { AppError } from "@/lib/errors";
+import { removeStoredFiles } from "@/lib/stored-files";
+import { deleteAccountSchema } from "@/lib/validation/account";
+
+export const dynamic = "force-dynamic";
+
+/** DELETE: the account and all of its data, after the password is confirmed. */
+export const DELETE = route(async ({ req, session }) => {
+  const input = await parseJson(req, deleteAccountSchema);
+  const ctx = await auth.$context;
+  const accounts = await ctx.internalAdapter.findAccounts(session!.user.id);
+  const hash = accounts.find((a) => a.providerId === "credential")?.password;
+  const ok = hash ? await ctx.password.verify({ hash, password: input.password }) : false;
+  if (!ok) throw new AppError("invalid", "That password is not right.", { password: ["That password is not right."] });
+  const { storedFiles } = await deleteAccount({ userId: session!.user.id });
+  await removeStoredFiles(storedFiles);
+  const res = NextResponse.json({ ok: true, deleted: true });
+  // The session row is gone with the user; clear the browser's cookie too.
+  res.cookies.delete("better-auth.session_token");
+  return res;
+});
