@@ -2,6 +2,7 @@
 // Export and deletion of everything the account holds.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Download, Trash2 } from "lucide-react";
+import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
@@ -15,6 +16,7 @@ import { deleteAccountSchema } from "@/lib/validation/account";
 type DeleteInput = z.infer<typeof deleteAccountSchema>;
 
 export function AccountData() {
+  const router = useRouter();
   const [serverError, setServerError] = useState<string | null>(null);
   const form = useForm<DeleteInput>({ resolver: zodResolver(deleteAccountSchema) });
   return (
@@ -45,7 +47,8 @@ export function AccountData() {
               body: JSON.stringify(values),
             });
             if (res.ok) {
-              window.location.assign("/?account=deleted");
+              router.push("/?account=deleted");
+              router.refresh();
               return;
             }
             const body = (await res.json().catch(() => null)) as { error?: { message: string; fields?: Record<string, string[]> } } | null;
