@@ -9,6 +9,8 @@ import { acquireDataDirLock, DataDirLockedError, lockPathFor } from "@/db/lock";
 function startHolder(dir: string) {
   const child = spawn("npx", ["tsx", "--tsconfig", "scripts/tsconfig.json", "tests/support/lock-holder.ts", dir], {
     cwd: process.cwd(),
+    // The lock guards PGlite folders: the child must not follow a PostgreSQL run's DATABASE_URL.
+    env: { ...process.env, DATABASE_URL: "", FOURPATCH_TEST_PG_URL: "" },
     stdio: ["pipe", "pipe", "inherit"],
   });
   const ready = new Promise<void>((resolve, reject) => {
