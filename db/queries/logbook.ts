@@ -404,3 +404,12 @@ export async function listVehicleChoices({ userId }: { userId: string }) {
     : [];
   return rows.map((r) => ({ ...r, mountedSet: mounted.find((m) => m.vehicleId === r.id) ?? null }));
 }
+
+/** The driver's display units (their own profile only). */
+export async function setUnits({ userId, units, pressureUnit }: { userId: string; units: "metric" | "imperial"; pressureUnit: "kpa" | "psi" | "bar" }) {
+  await db
+    .insert(driverProfile)
+    .values({ userId, units, pressureUnit })
+    .onConflictDoUpdate({ target: driverProfile.userId, set: { units, pressureUnit, updatedAt: new Date() } });
+  return { units, pressureUnit };
+}

@@ -1,9 +1,9 @@
-import { notFound, redirect } from "next/navigation";
+import { redirect } from "next/navigation";
+import { orNotFound } from "@/components/logbook/or-not-found";
 import { VehicleLogbookView } from "@/components/logbook/vehicle-logbook";
 import { getVehicleLogbook } from "@/db/queries/logbook";
 import { ownerAccess } from "@/lib/auth/logbook-access";
 import { getSession } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { todayIso } from "@/lib/validation/logbook";
 
 export const dynamic = "force-dynamic";
@@ -13,11 +13,6 @@ export default async function VehiclePage({ params, searchParams }: { params: Pr
   const { vehicleId } = await params;
   if (!session) redirect(`/sign-in?next=/garage/vehicles/${vehicleId}`);
   const { saved } = await searchParams;
-  try {
-    const book = await getVehicleLogbook({ access: ownerAccess(session), vehicleId, today: todayIso() });
-    return <VehicleLogbookView initial={book} saved={saved} />;
-  } catch (e) {
-    if (e instanceof AppError && e.code === "not_found") notFound();
-    throw e;
-  }
+  const book = await getVehicleLogbook({ access: ownerAccess(session), vehicleId, today: todayIso() }).catch(orNotFound);
+  return <VehicleLogbookView initial={book} saved={saved} />;
 }
