@@ -82,15 +82,17 @@ export async function saveReminderSettings({
   jurisdiction,
   emailReminders,
   settings,
+  timezone,
 }: {
   userId: string;
   jurisdiction: Jurisdiction;
   emailReminders: boolean;
   settings: StoredReminderSettings;
+  timezone: string;
 }) {
   await db
     .update(driverProfile)
-    .set({ jurisdiction, emailReminders, reminderSettings: settings, updatedAt: new Date() })
+    .set({ jurisdiction, emailReminders, reminderSettings: settings, timezone, updatedAt: new Date() })
     .where(eq(driverProfile.userId, userId));
 }
 

@@ -1,7 +1,7 @@
 import "server-only";
 // Saving the reminder form, shared by the server action and the API route.
 import type { z } from "zod";
-import { reminderProfile, saveReminderSettings } from "@/db/queries/reminders";
+import { optBackIn, reminderProfile, saveReminderSettings } from "@/db/queries/reminders";
 import { notFound } from "@/lib/errors";
 import { planAllows } from "@/lib/plan";
 import { reminderSettingsSchema, type reminderSettingsFormSchema } from "@/lib/validation/reminders";
@@ -20,6 +20,8 @@ export async function saveSettingsFor({ userId, input }: { userId: string; input
   });
   // Free drivers may keep the switch on; deliveries check the plan, so an upgrade needs no second visit.
   const emailReminders = input.emailReminders;
-  await saveReminderSettings({ userId, jurisdiction: input.jurisdiction, emailReminders, settings });
+  await saveReminderSettings({ userId, jurisdiction: input.jurisdiction, emailReminders, settings, timezone: input.timezone });
+  // Ticking the box on the page is as clear a wish as the unsubscribe link was.
+  if (emailReminders) await optBackIn({ userId, kind: "reminder-digest" });
   return { plan: profile.plan, emailReminders, emailActive: emailReminders && planAllows({ plan: profile.plan, feature: "email-reminders" }), settings };
 }

@@ -72,7 +72,24 @@ export function parseStoredSettings(raw: unknown): StoredReminderSettings {
 }
 
 const checkbox = z.preprocess((v) => v === "on" || v === "true" || v === true, z.boolean());
-const list = (v: unknown) => (Array.isArray(v) ? v : typeof v === "string" ? v.split(",").map((s) => s.trim()).filter(Boolean) : v);
+// Checkbox groups and repeated inputs arrive as arrays (with blanks for empty inputs) or as "14, 1".
+const list = (v: unknown) =>
+  Array.isArray(v)
+    ? v.filter((x) => x !== "" && x != null && x !== false)
+    : typeof v === "string"
+      ? v.split(",").map((s) => s.trim()).filter(Boolean)
+      : v == null || v === false
+        ? []
+        : v;
+
+function validTimeZone(tz: string): boolean {
+  try {
+    new Intl.DateTimeFormat("en-CA", { timeZone: tz });
+    return true;
+  } catch {
+    return false;
+  }
+}
 
 /** The settings form on /garage/reminders (server action and client form). */
 export const reminderSettingsFormSchema = z
@@ -86,6 +103,7 @@ export const reminderSettingsFormSchema = z
     springSwap: monthDay,
     rotationIntervalKm: z.coerce.number({ message: "Enter a distance in km." }).int("Whole kilometres only.").min(1000, "At least 1,000 km.").max(50_000, "At most 50,000 km."),
     emailReminders: checkbox,
+    timezone: z.string().trim().min(1, "Choose a time zone.").refine(validTimeZone, "That time zone is unknown."),
   })
   .refine((v) => v.jurisdiction !== "custom" || v.customDepthMm !== undefined, {
     path: ["customDepthMm"],
