@@ -128,8 +128,8 @@ export function FeedPanel({ feed, timezone }: { feed: FeedState; timezone: strin
       )}
 
       <div className="flex flex-wrap gap-2">
-        <Button type="button" onClick={makeLink} pending={pending && working === "new"} pendingLabel="Making a link…">
-          {state ? "Make a new feed link" : "Make my calendar link"}
+        <Button type="button" variant={state ? "secondary" : "primary"} onClick={makeLink} pending={pending && working === "new"} pendingLabel="Making a link…">
+          {fresh ? "Make another link (this one stops)" : state ? "Make a new feed link" : "Make my calendar link"}
         </Button>
         {state && !confirmOff ? (
           <Button type="button" variant="secondary" onClick={() => setConfirmOff(true)} disabled={pending}>

@@ -59,7 +59,7 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
           const locked = PLUS_KINDS.has(kind) && !plus;
           return (
             <label key={kind} className="flex min-h-11 items-center gap-3 rounded border border-asphalt-200 px-3 py-2">
-              <input type="checkbox" value={kind} disabled={locked} {...register("kinds")} className="size-5 accent-groove-700" />
+              <input type="checkbox" value={kind} disabled={locked} defaultChecked={defaults.kinds.includes(kind)} {...register("kinds")} className="size-5 accent-groove-700" />
               <span className="flex-1 text-asphalt-900">{REMINDER_KIND_LABELS[kind]}</span>
               {PLUS_KINDS.has(kind) ? <span className="rounded-full bg-groove-50 px-2 py-0.5 text-xs font-semibold text-groove-800">Plus</span> : null}
             </label>
@@ -70,7 +70,7 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Depth limits of" error={errors.jurisdiction?.message} hint="Picks the legal or advised minimum tread depth. Local law decides.">
           {({ id, describedBy, invalid }) => (
-            <Select id={id} aria-describedby={describedBy} aria-invalid={invalid} {...register("jurisdiction")}>
+            <Select id={id} aria-describedby={describedBy} aria-invalid={invalid} defaultValue={defaults.jurisdiction} {...register("jurisdiction")}>
               {JURISDICTIONS.map((j) => (
                 <option key={j} value={j}>
                   {JURISDICTION_LABELS[j]}
@@ -82,13 +82,13 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
         {jurisdiction === "custom" ? (
           <Field label="My depth limit (mm)" error={errors.customDepthMm?.message}>
             {({ id, describedBy, invalid }) => (
-              <Input id={id} inputMode="decimal" aria-describedby={describedBy} aria-invalid={invalid} {...register("customDepthMm")} />
+              <Input id={id} inputMode="decimal" aria-describedby={describedBy} aria-invalid={invalid} defaultValue={defaults.customDepthMm ?? ""} {...register("customDepthMm")} />
             )}
           </Field>
         ) : null}
         <Field label="Time zone" error={errors.timezone?.message} hint="Reminder days follow your own calendar date.">
           {({ id, describedBy, invalid }) => (
-            <Select id={id} aria-describedby={describedBy} aria-invalid={invalid} {...register("timezone")}>
+            <Select id={id} aria-describedby={describedBy} aria-invalid={invalid} defaultValue={defaults.timezone} {...register("timezone")}>
               {timeZones.map((tz) => (
                 <option key={tz} value={tz}>
                   {tz.replaceAll("_", " ")}
@@ -111,7 +111,7 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
               <label htmlFor={`alarm-${i}`} className="sr-only">
                 Alarm {i + 1}, days before
               </label>
-              <Input id={`alarm-${i}`} inputMode="numeric" placeholder="—" aria-invalid={!!alarmError} aria-describedby="alarm-hint" {...register(`alarmLeadDays.${i}` as "alarmLeadDays")} />
+              <Input id={`alarm-${i}`} inputMode="numeric" placeholder="—" aria-invalid={!!alarmError} aria-describedby="alarm-hint" defaultValue={defaults.alarmLeadDays[i] ?? ""} {...register(`alarmLeadDays.${i}` as "alarmLeadDays")} />
             </div>
           ))}
         </div>
@@ -125,14 +125,14 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
       ) : null}
       <div className="grid gap-4 sm:grid-cols-3">
         <Field label="Fit winter tires on (month-day)" error={errors.autumnSwap?.message} hint="For example 10-15">
-          {({ id, describedBy, invalid }) => <Input id={id} placeholder="10-15" aria-describedby={describedBy} aria-invalid={invalid} {...register("autumnSwap")} />}
+          {({ id, describedBy, invalid }) => <Input id={id} placeholder="10-15" aria-describedby={describedBy} aria-invalid={invalid} defaultValue={defaults.autumnSwap} {...register("autumnSwap")} />}
         </Field>
         <Field label="Take winter tires off on (month-day)" error={errors.springSwap?.message} hint="For example 04-15">
-          {({ id, describedBy, invalid }) => <Input id={id} placeholder="04-15" aria-describedby={describedBy} aria-invalid={invalid} {...register("springSwap")} />}
+          {({ id, describedBy, invalid }) => <Input id={id} placeholder="04-15" aria-describedby={describedBy} aria-invalid={invalid} defaultValue={defaults.springSwap} {...register("springSwap")} />}
         </Field>
         <Field label="Rotate every (km)" error={errors.rotationIntervalKm?.message} hint="Commonly 8,000–13,000 km, or as your manual says">
           {({ id, describedBy, invalid }) => (
-            <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} {...register("rotationIntervalKm")} />
+            <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} defaultValue={defaults.rotationIntervalKm} {...register("rotationIntervalKm")} />
           )}
         </Field>
       </div>
@@ -144,12 +144,12 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
           E-mail reminders
         </legend>
         <label className="flex min-h-11 items-center gap-3">
-          <input type="checkbox" {...register("emailReminders")} className="size-5 accent-groove-700" />
+          <input type="checkbox" defaultChecked={defaults.emailReminders} {...register("emailReminders")} className="size-5 accent-groove-700" />
           <span className="text-asphalt-900">Send me an e-mail before each date</span>
         </label>
         <Field label="Days before the date" error={errors.emailLeadDays?.message} className="max-w-48">
           {({ id, describedBy, invalid }) => (
-            <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} {...register("emailLeadDays")} />
+            <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} defaultValue={defaults.emailLeadDays} {...register("emailLeadDays")} />
           )}
         </Field>
       </fieldset>

@@ -39,6 +39,15 @@ export default async function RemindersPage() {
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <div className="space-y-6">
           <Card>
+            <CardTitle>Calendar feed</CardTitle>
+            <div className="mt-3">
+              <FeedPanel
+                feed={feed ? { createdAt: feed.createdAt.toISOString(), lastFetchedAt: feed.lastFetchedAt?.toISOString() ?? null } : null}
+                timezone={profile.timezone}
+              />
+            </div>
+          </Card>
+          <Card>
             <CardTitle>Coming up</CardTitle>
             <SafetyNote className="my-3" />
             {error ? <Alert tone="error">{error}</Alert> : <ReminderList items={items} />}
@@ -52,15 +61,6 @@ export default async function RemindersPage() {
                 </ul>
               </details>
             ) : null}
-          </Card>
-          <Card>
-            <CardTitle>Calendar feed</CardTitle>
-            <div className="mt-3">
-              <FeedPanel
-                feed={feed ? { createdAt: feed.createdAt.toISOString(), lastFetchedAt: feed.lastFetchedAt?.toISOString() ?? null } : null}
-                timezone={profile.timezone}
-              />
-            </div>
           </Card>
         </div>
         <div className="space-y-6">
