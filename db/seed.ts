@@ -2,11 +2,16 @@
 // conditions and reminders stay interesting whenever the demo is loaded.
 import { seedAccounts, type DemoIds } from "./seed/accounts";
 import { seedLogbook } from "./seed/logbook";
+import { seedReminders } from "./seed/reminders";
 
 export type SeedContext = { ids: DemoIds; today: string };
 
 /** Each area of the product adds its part of the scenario here, in order. */
-const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [{ name: "logbook", run: seedLogbook }];
+const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [
+  { name: "logbook", run: seedLogbook },
+  // Last: it only sets the drivers' reminder settings.
+  { name: "reminders", run: seedReminders },
+];
 
 export async function seedDemo({ today }: { today: string }): Promise<SeedContext> {
   const ids = await seedAccounts();

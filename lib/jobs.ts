@@ -3,4 +3,7 @@ import "server-only";
 export type DailyJob = { name: string; run: (now: Date) => Promise<unknown> };
 
 /** Jobs of the daily scheduler; features add theirs here. */
-export const dailyJobs: DailyJob[] = [];
+export const dailyJobs: DailyJob[] = [
+  // Loaded when it runs, so the scheduler module stays light at start-up.
+  { name: "reminder-deliveries", run: async (now) => (await import("./reminders/run")).runReminderDeliveries({ now }) },
+];

@@ -53,13 +53,22 @@ export const reminderDelivery = pgTable(
     reminderId: text("reminder_id").notNull(),
     dueOn: date("due_on").notNull(),
     channel: text("channel").notNull().default("email"),
+    // pending → sent, or cancelled when the reminder no longer applies.
     status: text("status").notNull().default("pending"),
     attempts: integer("attempts").notNull().default(0),
     providerMessageId: text("provider_message_id"),
+    // A run claims a pending row by stamping it; a claim older than the
+    // retry window is taken over by the next run (a crashed run loses nothing).
+    claimedAt: tz("claimed_at"),
+    claimId: text("claim_id"),
+    lastError: text("last_error"),
     createdAt: tz("created_at").notNull().defaultNow(),
     sentAt: tz("sent_at"),
   },
-  (t) => [uniqueIndex("reminder_delivery_uq").on(t.userId, t.reminderId, t.dueOn, t.channel)],
+  (t) => [
+    uniqueIndex("reminder_delivery_uq").on(t.userId, t.reminderId, t.dueOn, t.channel),
+    index("reminder_delivery_pending_idx").on(t.status, t.claimedAt),
+  ],
 );
 
 /** Per-kind e-mail opt-outs, reachable from a link without signing in. */

@@ -1,0 +1,43 @@
+// The driver's reminder feed, for calendar apps: GET /api/feed/<secret>(.ics).
+// No session: the secret is the key. Unknown, malformed and revoked secrets
+// get the same bare 404, so the answer tells a guesser nothing.
+import { computeFor, reminderProfile, userForFeedToken } from "@/db/queries/reminders";
+import { todayIn } from "@/lib/reminders/describe";
+import { buildFeed } from "@/lib/reminders/feed";
+import { tokenFromPath } from "@/lib/reminders/token";
+import { appUrl } from "@/lib/env";
+
+export const dynamic = "force-dynamic";
+
+const notFound = () =>
+  new Response("Not found\n", { status: 404, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });
+
+export async function GET(_req: Request, ctx: { params: Promise<{ token: string }> }) {
+  const token = tokenFromPath((await ctx.params).token);
+  if (!token) return notFound();
+  const userId = await userForFeedToken({ token });
+  if (!userId) return notFound();
+  const now = new Date();
+  const profile = await reminderProfile({ userId });
+  if (!profile) return notFound();
+  // "Today" is the driver's own date: it decides what is overdue.
+  const { items } = await computeFor({ profile, today: todayIn(profile.timezone, now) });
+  const body = buildFeed({
+    items,
+    plan: profile.plan,
+    timezone: profile.timezone,
+    alarmLeadDays: profile.settings.alarmLeadDays,
+    baseUrl: appUrl(),
+    now,
+  });
+  return new Response(body, {
+    status: 200,
+    headers: {
+      "content-type": "text/calendar; charset=utf-8",
+      "content-disposition": 'inline; filename="fourpatch-reminders.ics"',
+      "cache-control": "private, max-age=0, must-revalidate",
+      "referrer-policy": "no-referrer",
+      "x-robots-tag": "noindex",
+    },
+  });
+}

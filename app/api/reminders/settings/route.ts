@@ -1,0 +1,20 @@
+// The signed-in driver's reminder settings (the same schema as the form).
+import { reminderProfile } from "@/db/queries/reminders";
+import { parseJson, route } from "@/lib/api/handler";
+import { requireSession } from "@/lib/auth/roles";
+import { notFound } from "@/lib/errors";
+import { saveSettingsFor } from "@/lib/reminders/settings";
+import { reminderSettingsFormSchema } from "@/lib/validation/reminders";
+
+export const GET = route(async ({ session }) => {
+  const s = requireSession(session);
+  const profile = await reminderProfile({ userId: s.user.id });
+  if (!profile) throw notFound("Your driver profile");
+  return { plan: profile.plan, jurisdiction: profile.jurisdiction, emailReminders: profile.emailReminders, settings: profile.settings };
+});
+
+export const PUT = route(async ({ req, session }) => {
+  const s = requireSession(session);
+  const input = await parseJson(req, reminderSettingsFormSchema);
+  return saveSettingsFor({ userId: s.user.id, input });
+});

@@ -1,0 +1,250 @@
+import "server-only";
+// Reminders of one driver: the settings, the computed items, the calendar
+// feed's secret and the e-mail deliveries. Every query takes the acting
+// driver (or, for the feed, the secret that stands for them).
+import { and, eq, inArray, isNull, lt, or, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { driverProfile, emailOptOut, reminderDelivery, reminderFeed, user } from "@/db/schema";
+import { loadLogbookInput } from "@/db/queries/logbook-input";
+import { planAllowsKind, type Plan } from "@/lib/plan";
+import { hashFeedToken, newFeedToken } from "@/lib/reminders/token";
+import { computeReminders, JURISDICTIONS, type Jurisdiction, type ReminderItem, type Skipped } from "@/lib/tires";
+import { parseStoredSettings, type StoredReminderSettings } from "@/lib/validation/reminders";
+
+export type ReminderProfile = {
+  userId: string;
+  name: string;
+  email: string;
+  plan: Plan;
+  timezone: string;
+  jurisdiction: Jurisdiction;
+  emailReminders: boolean;
+  settings: StoredReminderSettings;
+  optedOut: string[];
+};
+
+export async function reminderProfile({ userId }: { userId: string }): Promise<ReminderProfile | null> {
+  const [row] = await db
+    .select({ p: driverProfile, name: user.name, email: user.email })
+    .from(driverProfile)
+    .innerJoin(user, eq(user.id, driverProfile.userId))
+    .where(eq(driverProfile.userId, userId))
+    .limit(1);
+  if (!row) return null;
+  const opt = await db.select({ kind: emailOptOut.kind }).from(emailOptOut).where(eq(emailOptOut.userId, userId));
+  const jurisdiction = (JURISDICTIONS as string[]).includes(row.p.jurisdiction) ? (row.p.jurisdiction as Jurisdiction) : "EU";
+  return {
+    userId,
+    name: row.name,
+    email: row.email,
+    plan: row.p.plan,
+    timezone: row.p.timezone,
+    jurisdiction,
+    emailReminders: row.p.emailReminders,
+    settings: parseStoredSettings(row.p.reminderSettings),
+    optedOut: opt.map((o) => o.kind),
+  };
+}
+
+export type DriverReminders = { profile: ReminderProfile; items: ReminderItem[]; skipped: Skipped[]; error?: string };
+
+/**
+ * The driver's coming reminders in date order: the core's computation over
+ * their whole logbook, narrowed to the kinds they chose and their plan allows.
+ */
+export async function remindersFor({ userId, today }: { userId: string; today: string }): Promise<DriverReminders | null> {
+  const profile = await reminderProfile({ userId });
+  if (!profile) return null;
+  return { profile, ...(await computeFor({ profile, today })) };
+}
+
+export async function computeFor({ profile, today }: { profile: ReminderProfile; today: string }) {
+  const logbook = await loadLogbookInput({ ownerId: profile.userId });
+  const s = profile.settings;
+  const result = computeReminders(
+    logbook,
+    {
+      jurisdiction: profile.jurisdiction,
+      customDepthMm: s.customDepthMm,
+      rotationIntervalKm: s.rotationIntervalKm,
+      autumnSwap: s.autumnSwap,
+      springSwap: s.springSwap,
+    },
+    { today },
+  );
+  if (!result.ok) return { items: [], skipped: [], error: result.error };
+  const items = result.items.filter((i) => s.kinds.includes(i.kind) && planAllowsKind({ plan: profile.plan, kind: i.kind }));
+  return { items, skipped: result.skipped };
+}
+
+export async function saveReminderSettings({
+  userId,
+  jurisdiction,
+  emailReminders,
+  settings,
+  timezone,
+}: {
+  userId: string;
+  jurisdiction: Jurisdiction;
+  emailReminders: boolean;
+  settings: StoredReminderSettings;
+  timezone: string;
+}) {
+  await db
+    .update(driverProfile)
+    .set({ jurisdiction, emailReminders, reminderSettings: settings, timezone, updatedAt: new Date() })
+    .where(eq(driverProfile.userId, userId));
+}
+
+// ---- the calendar feed -------------------------------------------------
+
+export type FeedState = { createdAt: Date; lastFetchedAt: Date | null } | null;
+
+export async function activeFeedOf({ userId }: { userId: string }): Promise<FeedState> {
+  const [row] = await db
+    .select({ createdAt: reminderFeed.createdAt, lastFetchedAt: reminderFeed.lastFetchedAt })
+    .from(reminderFeed)
+    .where(and(eq(reminderFeed.userId, userId), isNull(reminderFeed.revokedAt)))
+    .limit(1);
+  return row ?? null;
+}
+
+/** A new secret for the driver's feed; every older one stops working in the same transaction. */
+export async function regenerateFeed({ userId }: { userId: string }): Promise<string> {
+  const token = newFeedToken();
+  await db.transaction(async (tx) => {
+    await tx.update(reminderFeed).set({ revokedAt: new Date() }).where(and(eq(reminderFeed.userId, userId), isNull(reminderFeed.revokedAt)));
+    await tx.insert(reminderFeed).values({ userId, tokenHash: hashFeedToken(token) });
+  });
+  return token;
+}
+
+export async function revokeFeed({ userId }: { userId: string }): Promise<void> {
+  await db.update(reminderFeed).set({ revokedAt: new Date() }).where(and(eq(reminderFeed.userId, userId), isNull(reminderFeed.revokedAt)));
+}
+
+/** The driver a live feed secret stands for, or null; records the fetch. */
+export async function userForFeedToken({ token }: { token: string }): Promise<string | null> {
+  const [row] = await db
+    .update(reminderFeed)
+    .set({ lastFetchedAt: new Date() })
+    .where(and(eq(reminderFeed.tokenHash, hashFeedToken(token)), isNull(reminderFeed.revokedAt)))
+    .returning({ userId: reminderFeed.userId });
+  if (!row) return null;
+  const [u] = await db.select({ banned: user.banned }).from(user).where(eq(user.id, row.userId)).limit(1);
+  return u && !u.banned ? row.userId : null;
+}
+
+// ---- e-mail deliveries -------------------------------------------------
+
+/** Plus drivers with e-mail reminders on who have not opted out of the digest. */
+export async function driversForDelivery(): Promise<string[]> {
+  const rows = await db
+    .select({ userId: driverProfile.userId })
+    .from(driverProfile)
+    .innerJoin(user, eq(user.id, driverProfile.userId))
+    .leftJoin(emailOptOut, and(eq(emailOptOut.userId, driverProfile.userId), eq(emailOptOut.kind, "reminder-digest")))
+    .where(
+      and(
+        eq(driverProfile.plan, "plus"),
+        eq(driverProfile.emailReminders, true),
+        isNull(emailOptOut.userId),
+        or(isNull(user.banned), eq(user.banned, false)),
+      ),
+    );
+  return rows.map((r) => r.userId);
+}
+
+export type Claimed = { id: string; reminderId: string; dueOn: string };
+
+/**
+ * Claims the deliveries this run may send for one driver: new rows it wins
+ * by inserting first (the unique key lets exactly one run win each), and
+ * pending rows whose claim is older than `staleBefore` (a run that crashed
+ * or failed). Each claim is one atomic statement, so two overlapping runs
+ * never hold the same row.
+ */
+export async function claimDeliveries({
+  userId,
+  due,
+  claimId,
+  now,
+  staleBefore,
+}: {
+  userId: string;
+  due: { reminderId: string; dueOn: string }[];
+  claimId: string;
+  now: Date;
+  staleBefore: Date;
+}): Promise<Claimed[]> {
+  const won = due.length
+    ? await db
+        .insert(reminderDelivery)
+        .values(due.map((d) => ({ userId, reminderId: d.reminderId, dueOn: d.dueOn, channel: "email", status: "pending", claimId, claimedAt: now, attempts: 1 })))
+        .onConflictDoNothing()
+        .returning({ id: reminderDelivery.id, reminderId: reminderDelivery.reminderId, dueOn: reminderDelivery.dueOn })
+    : [];
+  const retaken = await db
+    .update(reminderDelivery)
+    .set({ claimId, claimedAt: now, attempts: sql`${reminderDelivery.attempts} + 1` })
+    .where(
+      and(
+        eq(reminderDelivery.userId, userId),
+        eq(reminderDelivery.channel, "email"),
+        eq(reminderDelivery.status, "pending"),
+        or(isNull(reminderDelivery.claimedAt), lt(reminderDelivery.claimedAt, staleBefore)),
+      ),
+    )
+    .returning({ id: reminderDelivery.id, reminderId: reminderDelivery.reminderId, dueOn: reminderDelivery.dueOn });
+  return [...won, ...retaken];
+}
+
+export async function markDeliveries({
+  userId,
+  ids,
+  claimId,
+  outcome,
+}: {
+  userId: string;
+  ids: string[];
+  claimId: string;
+  outcome: { status: "sent"; providerMessageId: string } | { status: "cancelled" } | { status: "failed"; error: string; retryNow: boolean };
+}) {
+  if (ids.length === 0) return;
+  const mine = and(eq(reminderDelivery.userId, userId), inArray(reminderDelivery.id, ids), eq(reminderDelivery.claimId, claimId));
+  if (outcome.status === "sent") {
+    await db.update(reminderDelivery).set({ status: "sent", sentAt: new Date(), providerMessageId: outcome.providerMessageId, lastError: null }).where(mine);
+  } else if (outcome.status === "cancelled") {
+    await db.update(reminderDelivery).set({ status: "cancelled" }).where(mine);
+  } else {
+    // A refusal we know about can be retried by the next run; an unknown
+    // outcome (exception) keeps its claim until the retry window passes.
+    await db
+      .update(reminderDelivery)
+      .set({ lastError: outcome.error.slice(0, 500), ...(outcome.retryNow ? { claimedAt: null } : {}) })
+      .where(mine);
+  }
+}
+
+export async function deliveriesOf({ userId }: { userId: string }) {
+  return db.select().from(reminderDelivery).where(eq(reminderDelivery.userId, userId));
+}
+
+// ---- e-mail opt-outs ---------------------------------------------------
+
+export async function optOut({ userId, kind }: { userId: string; kind: string }) {
+  await db.insert(emailOptOut).values({ userId, kind }).onConflictDoNothing();
+}
+
+export async function optBackIn({ userId, kind }: { userId: string; kind: string }) {
+  await db.delete(emailOptOut).where(and(eq(emailOptOut.userId, userId), eq(emailOptOut.kind, kind)));
+}
+
+export async function isOptedOut({ userId, kind }: { userId: string; kind: string }): Promise<boolean> {
+  const [row] = await db
+    .select({ kind: emailOptOut.kind })
+    .from(emailOptOut)
+    .where(and(eq(emailOptOut.userId, userId), eq(emailOptOut.kind, kind)))
+    .limit(1);
+  return !!row;
+}

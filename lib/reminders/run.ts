@@ -1,0 +1,118 @@
+import "server-only";
+// The daily e-mail run: each due reminder is mailed once per driver and date.
+//
+// Exactly-once, by construction:
+// 1. A run first INSERTs one reminder_delivery row per due item, ON CONFLICT
+//    DO NOTHING on (user, reminder, due date, channel): of two overlapping
+//    runs only one gets each row back, and only that one sends it.
+// 2. It sends one digest of the rows it won, then marks them sent.
+// 3. A run that dies between 1 and 3 leaves its rows `pending` with its
+//    claim stamp. A later run takes over pending rows whose stamp is older
+//    than the retry window (an atomic UPDATE … WHERE status = 'pending' AND
+//    claimed_at < cutoff), so nothing is lost; the window is longer than a
+//    send can take, so a slow run is never doubled. A refusal the provider
+//    reports (not an exception) clears the stamp, to be retried next run.
+import { randomUUID } from "node:crypto";
+import { claimDeliveries, computeFor, driversForDelivery, markDeliveries, reminderProfile } from "@/db/queries/reminders";
+import { conditionLabelFor } from "@/lib/reminders/severity";
+import ReminderDigestEmail from "@/emails/reminder-digest";
+import { sendEmail, type SendEmailInput, type SendEmailResult } from "@/lib/email/send";
+import { oneClickUnsubscribeUrl, unsubscribeUrl } from "@/lib/email/unsubscribe";
+import { appUrl } from "@/lib/env";
+import { planAllows } from "@/lib/plan";
+import { addDays, CAUTION, type ReminderItem } from "@/lib/tires";
+import { formatDay, logbookPath, todayIn, whatToDo } from "./describe";
+
+export type RunOptions = {
+  now?: Date;
+  /** The sender; tests inject a failing one. */
+  send?: (input: SendEmailInput) => Promise<SendEmailResult>;
+  /** Items overdue by more than this many days are not mailed (the page and feed still show them). */
+  windowDays?: number;
+  /** A pending claim older than this is taken over by the next run. */
+  retryAfterMinutes?: number;
+};
+
+export type RunSummary = { runId: string; drivers: number; emails: number; items: number; cancelled: number; failed: number };
+
+export async function runReminderDeliveries({ now = new Date(), send = sendEmail, windowDays = 30, retryAfterMinutes = 15 }: RunOptions = {}): Promise<RunSummary> {
+  const runId = randomUUID();
+  const summary: RunSummary = { runId, drivers: 0, emails: 0, items: 0, cancelled: 0, failed: 0 };
+  const staleBefore = new Date(now.getTime() - retryAfterMinutes * 60_000);
+
+  for (const userId of await driversForDelivery()) {
+    try {
+      const profile = await reminderProfile({ userId });
+      if (!profile || !planAllows({ plan: profile.plan, feature: "email-reminders" })) continue;
+      summary.drivers += 1;
+      const today = todayIn(profile.timezone, now);
+      const { items } = await computeFor({ profile, today });
+      const lead = profile.settings.emailLeadDays;
+      const due = items.filter((i) => addDays(i.date, -lead) <= today && i.date >= addDays(today, -windowDays));
+
+      const claimed = await claimDeliveries({ userId, due: due.map((i) => ({ reminderId: i.id, dueOn: i.date })), claimId: runId, now, staleBefore });
+      if (claimed.length === 0) continue;
+
+      // A retaken row whose reminder moved or vanished since is not sent: the moved date has a row of its own.
+      const current = new Map(items.map((i) => [`${i.id}|${i.date}`, i]));
+      const toSend = claimed.flatMap((c) => {
+        const item = current.get(`${c.reminderId}|${c.dueOn}`);
+        return item ? [{ row: c, item }] : [];
+      });
+      const gone = claimed.filter((c) => !current.has(`${c.reminderId}|${c.dueOn}`)).map((c) => c.id);
+      await markDeliveries({ userId, ids: gone, claimId: runId, outcome: { status: "cancelled" } });
+      summary.cancelled += gone.length;
+      if (toSend.length === 0) continue;
+
+      const ids = toSend.map((t) => t.row.id);
+      let result: SendEmailResult;
+      try {
+        result = await send(digestEmail({ to: profile.email, name: profile.name, userId, items: toSend.map((t) => t.item) }));
+      } catch (err) {
+        // Unknown whether it went out: keep the claim; the retry window decides.
+        await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "failed", error: String(err), retryNow: false } });
+        summary.failed += 1;
+        continue;
+      }
+      if (!result.ok) {
+        await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "failed", error: result.error, retryNow: true } });
+        summary.failed += 1;
+        continue;
+      }
+      await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "sent", providerMessageId: result.id } });
+      summary.emails += 1;
+      summary.items += ids.length;
+    } catch (err) {
+      console.error(`[reminders] delivery for ${userId} failed`, err);
+      summary.failed += 1;
+    }
+  }
+  return summary;
+}
+
+function digestEmail({ to, name, userId, items }: { to: string; name: string; userId: string; items: ReminderItem[] }): SendEmailInput {
+  const base = appUrl();
+  const sorted = [...items].sort((a, b) => a.date.localeCompare(b.date));
+  const subject = sorted.length === 1 ? `Tire reminder: ${sorted[0].subject}` : `${sorted.length} tire reminders, first: ${sorted[0].subject}`;
+  return {
+    to,
+    subject,
+    kind: "reminder-digest",
+    unsubscribeUrl: oneClickUnsubscribeUrl({ userId, kind: "reminder-digest" }),
+    react: ReminderDigestEmail({
+      name: name.split(" ")[0] || name,
+      remindersUrl: `${base}/garage/reminders`,
+      unsubscribeUrl: unsubscribeUrl({ userId, kind: "reminder-digest" }),
+      caution: CAUTION,
+      items: sorted.map((i) => ({
+        subject: i.subject,
+        dateLabel: formatDay(i.date),
+        severityLabel: conditionLabelFor(i.severity),
+        overdue: i.overdue,
+        reason: i.explanation.replace(CAUTION, "").trim(),
+        whatToDo: whatToDo(i.kind),
+        url: `${base}${logbookPath(i)}`,
+      })),
+    }),
+  };
+}
