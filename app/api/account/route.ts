@@ -3,7 +3,7 @@ import { deleteAccount } from "@/db/queries/account";
 import { parseJson, route } from "@/lib/api/handler";
 import { auth } from "@/lib/auth/server";
 import { AppError } from "@/lib/errors";
-import { removeStoredFiles } from "@/lib/stored-files";
+import { removeStoredFile } from "@/lib/uploads";
 import { deleteAccountSchema } from "@/lib/validation/account";
 
 export const dynamic = "force-dynamic";
@@ -17,7 +17,7 @@ export const DELETE = route(async ({ req, session }) => {
   const ok = hash ? await ctx.password.verify({ hash, password: input.password }) : false;
   if (!ok) throw new AppError("invalid", "That password is not right.", { password: ["That password is not right."] });
   const { storedFiles } = await deleteAccount({ userId: session!.user.id });
-  await removeStoredFiles(storedFiles);
+  await Promise.all(storedFiles.map((name) => removeStoredFile(name)));
   const res = NextResponse.json({ ok: true, deleted: true });
   // The session row is gone with the user; clear the browser's cookie too.
   res.cookies.delete("better-auth.session_token");

@@ -1,4 +1,5 @@
 import { redirect } from "next/navigation";
+import { AccountData } from "@/components/account/account-data";
 import { UnitsForm } from "@/components/logbook/units-form";
 import { Card, CardTitle } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
@@ -20,6 +21,7 @@ export default async function AccountPage() {
         <p className="text-sm text-asphalt-600">The logbook stores millimetres, kilometres and kPa; this only changes how they are shown and typed.</p>
         <UnitsForm initial={{ units: prefs.units, pressureUnit: prefs.pressureUnit }} save={saveUnits} />
       </Card>
+      <AccountData />
     </div>
   );
 }
