@@ -104,6 +104,7 @@ export { loadIndexKg, speedSymbolKmh, LOAD_INDEX_KG, SPEED_SYMBOLS, type SpeedSy
 export { validateVin, vinCheckDigit, type VinErrorCode, type VinOk } from "./vin";
 export {
   computeReminders,
+  seasonalSwapDate,
   reminderId,
   DEFAULT_REMINDER_SETTINGS,
   type LogbookInput,

@@ -123,6 +123,32 @@ function nextMonthDay(md: string, today: string): string {
   return today;
 }
 
+/** The latest date on or before `today` with this month-day. */
+function lastMonthDay(md: string, today: string): string {
+  const [m, d] = md.split("-").map(Number);
+  const y = Number(today.slice(0, 4));
+  for (const year of [y, y - 1]) {
+    const last = new Date(Date.UTC(year, m, 0)).getUTCDate();
+    const iso = fromDayNumber(dayNumberOf(year, m, Math.min(d, last)));
+    if (iso <= today) return iso;
+  }
+  /* c8 ignore next */
+  return today;
+}
+
+/**
+ * When a winter set is still where it was after its change date passed (a
+ * stored set in December, a mounted one in June), the swap is overdue since
+ * that date; otherwise it is due on the next one.
+ */
+export function seasonalSwapDate(mounted: boolean, autumn: string, spring: string, today: string): { date: string; overdue: boolean } {
+  const target = mounted ? spring : autumn;
+  const opposite = mounted ? autumn : spring;
+  const lastTarget = lastMonthDay(target, today);
+  if (lastTarget > lastMonthDay(opposite, today)) return { date: lastTarget, overdue: lastTarget < today };
+  return { date: nextMonthDay(target, today), overdue: false };
+}
+
 function severityFor(date: string, today: string, leadMonths: number): ReminderSeverity {
   if (date <= today) return "replace";
   if (addMonths(date, -leadMonths) <= today) return "plan";
@@ -311,7 +337,7 @@ export function computeReminders(
     // Seasonal swap: one item per winter set, pointing at the next change of season.
     for (const set of sets.filter((x) => x.kind === "winter")) {
       const mounted = set.state === "mounted";
-      const date = nextMonthDay(mounted ? s.springSwap : s.autumnSwap, today as string);
+      const { date, overdue } = seasonalSwapDate(mounted, s.autumnSwap, s.springSwap, today as string);
       const label = `${set.name || "winter set"} on ${vehicleName}`;
       items.push({
         vehicleId: vehicle.id,
@@ -320,8 +346,8 @@ export function computeReminders(
         kind: "seasonal-swap",
         subject: mounted ? `${label}: time to take the winter tires off` : `${label}: time to fit the winter tires`,
         date,
-        severity: "info",
-        overdue: false,
+        severity: overdue ? "watch" : "info",
+        overdue,
         explanation: withCaution(
           mounted
             ? "Winter tires wear faster in warm weather; swap when the season turns, on the date you chose."

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { CAUTION, computeReminders, reminderId, type LogbookInput, type ReminderItem } from "@/lib/tires";
+import { CAUTION, computeReminders, reminderId, seasonalSwapDate, type LogbookInput, type ReminderItem } from "@/lib/tires";
 
 const today = "2025-06-01";
 
@@ -107,6 +107,25 @@ describe("computeReminders", () => {
     const ids = (xs: ReminderItem[]) => xs.map((i) => i.id).sort();
     expect(ids(later.items)).toEqual(ids(items));
     expect(byId(later.items, "veh-1/set-winter/seasonal-swap")?.date).toBe("2025-11-01");
+  });
+});
+
+describe("seasonal swap dates (dates computed by hand from the chosen month-days)", () => {
+  it("a winter set still in storage after the autumn date is overdue since that date", () => {
+    expect(seasonalSwapDate(false, "10-15", "04-15", "2026-12-01")).toEqual({ date: "2026-10-15", overdue: true });
+    // January: the autumn date of the previous year is still the latest change.
+    expect(seasonalSwapDate(false, "10-15", "04-15", "2027-01-20")).toEqual({ date: "2026-10-15", overdue: true });
+    expect(seasonalSwapDate(false, "10-15", "04-15", "2026-10-15")).toEqual({ date: "2026-10-15", overdue: false });
+  });
+
+  it("a winter set still mounted after the spring date is overdue since that date", () => {
+    expect(seasonalSwapDate(true, "10-15", "04-15", "2026-06-10")).toEqual({ date: "2026-04-15", overdue: true });
+  });
+
+  it("in the right season the next change date is given", () => {
+    expect(seasonalSwapDate(false, "10-15", "04-15", "2026-07-01")).toEqual({ date: "2026-10-15", overdue: false });
+    expect(seasonalSwapDate(true, "10-15", "04-15", "2026-12-01")).toEqual({ date: "2027-04-15", overdue: false });
+    expect(seasonalSwapDate(true, "10-15", "04-15", "2027-02-01")).toEqual({ date: "2027-04-15", overdue: false });
   });
 });
 
