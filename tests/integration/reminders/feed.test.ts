@@ -70,8 +70,8 @@ describe("reminder feed for a known logbook (Plus driver)", () => {
     // DOT 0722 = week from Sun 13 Feb 2022 [sec, §1]; winter sets: watch at 4, replace at 6 years [practice, §3].
     expect(dateOf(uids.get(uid(winter, "age-watch"))!, "dtstart")).toBe("2026-02-13");
     expect(dateOf(uids.get(uid(winter, "age-replace"))!, "dtstart")).toBe("2028-02-13");
-    // A stored winter set: next autumn swap on the default 15 October.
-    expect(dateOf(uids.get(uid(winter, "seasonal-swap"))!, "dtstart")).toBe("2026-10-15");
+    // A winter set still stored in March, after the default 15 October: the swap is overdue since then.
+    expect(dateOf(uids.get(uid(winter, "seasonal-swap"))!, "dtstart")).toBe("2025-10-15");
     // 10,000 km since the first check at 20,000 km: rotation was due at the 30,000 km check (1 March).
     expect(dateOf(uids.get(uid(summer, "rotation-due"))!, "dtstart")).toBe("2026-03-01");
     // 1 mm per 10,000 km from 6.0 mm: 1.6 mm (EU, 89/459/EEC [sec]) is 44,000 km and about two years away.
