@@ -1,13 +1,15 @@
 // Loads the invented demo scenario. Dates are relative to `today`, so the
 // conditions and reminders stay interesting whenever the demo is loaded.
 import { seedAccounts, type DemoIds } from "./seed/accounts";
+import { seedLogbook } from "./seed/logbook";
 import { seedReminders } from "./seed/reminders";
 
 export type SeedContext = { ids: DemoIds; today: string };
 
 /** Each area of the product adds its part of the scenario here, in order. */
 const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [
-  // Last: it only sets the drivers' reminder settings.
+  { name: "logbook", run: seedLogbook },
+  // Last: it sets the drivers' reminder settings (and adds a vehicle only if Ada has none).
   { name: "reminders", run: seedReminders },
 ];
 

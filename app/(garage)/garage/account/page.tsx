@@ -1,0 +1,25 @@
+import { redirect } from "next/navigation";
+import { UnitsForm } from "@/components/logbook/units-form";
+import { Card, CardTitle } from "@/components/ui/card";
+import { PageHeader } from "@/components/ui/page-header";
+import { driverPrefs } from "@/db/queries/logbook";
+import { getSession } from "@/lib/auth/session";
+import { saveUnits } from "./actions";
+
+export const dynamic = "force-dynamic";
+
+export default async function AccountPage() {
+  const session = await getSession();
+  if (!session) redirect("/sign-in?next=/garage/account");
+  const prefs = await driverPrefs({ userId: session.user.id });
+  return (
+    <div className="mx-auto max-w-3xl space-y-4">
+      <PageHeader title="Account" description={`${session.user.name} · ${session.user.email}`} />
+      <Card className="space-y-3">
+        <CardTitle>Units</CardTitle>
+        <p className="text-sm text-asphalt-600">The logbook stores millimetres, kilometres and kPa; this only changes how they are shown and typed.</p>
+        <UnitsForm initial={{ units: prefs.units, pressureUnit: prefs.pressureUnit }} save={saveUnits} />
+      </Card>
+    </div>
+  );
+}

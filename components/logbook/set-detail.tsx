@@ -1,0 +1,143 @@
+"use client";
+// One set: each tire's age, depth, wear pattern and projection, the wear
+// chart, the readings table and the set's own limits.
+import { useQuery } from "@tanstack/react-query";
+import Link from "next/link";
+import { Alert } from "@/components/ui/alert";
+import { buttonVariants } from "@/components/ui/button-variants";
+import { Card, CardTitle } from "@/components/ui/card";
+import { ConditionBadge } from "@/components/ui/condition-badge";
+import { PageHeader } from "@/components/ui/page-header";
+import { SafetyNote } from "@/components/ui/safety-note";
+import type { SetDetail } from "@/db/queries/logbook";
+import { depthUnitFor, formatDepth, formatDistance, formatPressure } from "@/lib/units";
+import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/logbook";
+import { api, keys } from "./api";
+import { formatDate, formatMoney, setTitle } from "./format";
+import { TireList } from "./tire-list";
+import { WearChart } from "./wear-chart";
+
+export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: string }) {
+  const { data } = useQuery({ queryKey: keys.set(initial.set.id), queryFn: () => api<SetDetail>(`/api/sets/${initial.set.id}`), initialData: initial });
+  const d = data ?? initial;
+  const s = d.set;
+  const depthUnit = depthUnitFor(d.viewer.units);
+  const distanceUnit = d.vehicle.odometerUnit;
+  const state = s.state === "mounted" ? "on the car" : s.state === "stored" ? `stored${s.storageLocation ? ` at ${s.storageLocation}` : ""}` : "retired";
+  const positionOf = new Map(s.tires.map((t) => [t.id, POSITION_LABELS[t.position]]));
+
+  return (
+    <>
+      <PageHeader
+        title={setTitle(s)}
+        description={
+          <>
+            <Link href={`/garage/vehicles/${d.vehicle.id}`}>{d.vehicle.nickname}</Link> · {SET_KIND_LABELS[s.kind]} · {s.size} · {state}
+          </>
+        }
+        actions={
+          s.state !== "retired" ? (
+            <Link href={`/garage/vehicles/${d.vehicle.id}/check?set=${s.id}`} className={buttonVariants()}>
+              Record a tread check
+            </Link>
+          ) : null
+        }
+      />
+      {saved === "check" ? <Alert tone="success" className="mb-4">The tread check is saved; the chart includes it.</Alert> : null}
+      <div className="mb-6 grid gap-4 lg:grid-cols-[2fr_1fr]">
+        <Card className="space-y-3">
+          <CardTitle>Wear chart</CardTitle>
+          <WearChart tires={s.tires} limitMm={s.limit.minMm} depthUnit={depthUnit} distanceUnit={distanceUnit} />
+        </Card>
+        <Card className="space-y-3">
+          <CardTitle>The set</CardTitle>
+          <div className="flex items-center gap-2">{s.condition ? <ConditionBadge condition={s.condition} detail="worst tire" /> : <span>No condition yet.</span>}</div>
+          <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
+            <dt className="text-asphalt-600">Depth limit</dt>
+            <dd>
+              {formatDepth(s.limit.minMm, depthUnit)} — {s.limit.source}
+              {s.limit.legal ? " (legal minimum)" : ""}
+            </dd>
+            <dt className="text-asphalt-600">Bought</dt>
+            <dd>
+              {formatDate(s.purchasedOn)}
+              {s.seller ? ` from ${s.seller}` : ""}
+            </dd>
+            <dt className="text-asphalt-600">Price</dt>
+            <dd>{formatMoney(s.priceCents, s.currency)}</dd>
+          </dl>
+          {s.limit.note ? <p className="text-xs text-asphalt-600">{s.limit.note}</p> : null}
+          {s.axleAdvice.length ? (
+            <ul className="list-disc pl-5 text-sm">
+              {s.axleAdvice.map((a) => (
+                <li key={a}>{a}</li>
+              ))}
+            </ul>
+          ) : null}
+          <SafetyNote compact />
+        </Card>
+      </div>
+
+      <section aria-labelledby="tires-h" className="mb-6 space-y-3">
+        <h2 id="tires-h" className="text-xl font-bold">
+          Each tire
+        </h2>
+        <TireList tires={s.tires} depthUnit={depthUnit} showPattern />
+        {s.tires.some((t) => t.ageReason || t.depthReason) ? (
+          <details className="rounded border border-asphalt-200 bg-white p-3 text-sm">
+            <summary className="cursor-pointer font-semibold">Why each condition</summary>
+            <ul className="mt-2 space-y-1">
+              {s.tires.map((t) => (
+                <li key={t.id}>
+                  <strong>{POSITION_LABELS[t.position]}:</strong> {[t.ageReason, t.depthReason].filter(Boolean).join(" ")}
+                </li>
+              ))}
+            </ul>
+          </details>
+        ) : null}
+      </section>
+
+      <section aria-labelledby="readings-h" className="mb-6 space-y-3">
+        <h2 id="readings-h" className="text-xl font-bold">
+          Readings
+        </h2>
+        {d.checks.length === 0 ? (
+          <p className="text-asphalt-600">No checks yet.</p>
+        ) : (
+          <div className="overflow-x-auto rounded border border-asphalt-200">
+            <table className="w-full min-w-[36rem] text-left text-sm" data-testid="readings-table">
+              <thead className="bg-asphalt-100">
+                <tr>
+                  <th scope="col" className="px-3 py-2">Date</th>
+                  <th scope="col" className="px-3 py-2">Odometer</th>
+                  <th scope="col" className="px-3 py-2">Tire</th>
+                  <th scope="col" className="px-3 py-2">Inner · centre · outer</th>
+                  <th scope="col" className="px-3 py-2">Pressure</th>
+                  <th scope="col" className="px-3 py-2">By</th>
+                </tr>
+              </thead>
+              <tbody>
+                {d.checks.flatMap((c) =>
+                  c.readings.map((r) => (
+                    <tr key={`${c.id}-${r.tireId}`} className="border-t border-asphalt-200">
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDate(c.checkedOn)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDistance(c.odometerKm, distanceUnit)}</td>
+                      <td className="px-3 py-2">{positionOf.get(r.tireId) ?? "—"}</td>
+                      <td className="px-3 py-2">
+                        {r.approximate
+                          ? `about ${formatDepth(r.centreMm, depthUnit)} (coin)`
+                          : [r.innerMm, r.centreMm, r.outerMm].map((x) => formatDepth(x, depthUnit)).join(" · ")}
+                      </td>
+                      <td className="px-3 py-2">{formatPressure(r.pressureKpa, d.viewer.pressureUnit)}</td>
+                      <td className="px-3 py-2">{c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"}</td>
+                    </tr>
+                  )),
+                )}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+    </>
+  );
+}

@@ -1,0 +1,124 @@
+"use client";
+// Depth against date or odometer for each tire of a set, with the set's
+// limit as a line and each tire's projection to the limit dashed. Each tire
+// has its own colour *and* marker shape, and the same facts are in the
+// table under the chart.
+import { useState } from "react";
+import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import type { TireView } from "@/db/queries/logbook-view";
+import { kmToDistance, mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
+import { POSITION_LABELS } from "@/lib/validation/logbook";
+import { formatDate } from "./format";
+
+const LOOK = [
+  { stroke: "#1e625c", shape: "circle" },
+  { stroke: "#a04a00", shape: "square" },
+  { stroke: "#5b3fa0", shape: "triangle" },
+  { stroke: "#434a56", shape: "diamond" },
+  { stroke: "#1f7a3d", shape: "cross" },
+] as const;
+
+const day = (iso: string) => Date.UTC(Number(iso.slice(0, 4)), Number(iso.slice(5, 7)) - 1, Number(iso.slice(8, 10)));
+const isoOf = (ms: number) => new Date(ms).toISOString().slice(0, 10);
+
+type Shape = (typeof LOOK)[number]["shape"];
+function Marker({ cx, cy, stroke, shape }: { cx?: number; cy?: number; stroke: string; shape: Shape }) {
+  if (cx == null || cy == null) return null;
+  const s = 4.5;
+  if (shape === "square") return <rect x={cx - s} y={cy - s} width={s * 2} height={s * 2} fill={stroke} />;
+  if (shape === "triangle") return <polygon points={`${cx},${cy - s - 1} ${cx - s - 1},${cy + s} ${cx + s + 1},${cy + s}`} fill={stroke} />;
+  if (shape === "diamond") return <polygon points={`${cx},${cy - s - 1} ${cx + s + 1},${cy} ${cx},${cy + s + 1} ${cx - s - 1},${cy}`} fill={stroke} />;
+  if (shape === "cross") return <path d={`M${cx - s},${cy - s}L${cx + s},${cy + s}M${cx + s},${cy - s}L${cx - s},${cy + s}`} stroke={stroke} strokeWidth={2.5} />;
+  return <circle cx={cx} cy={cy} r={s} fill={stroke} />;
+}
+
+export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: TireView[]; limitMm: number; depthUnit: DepthUnit; distanceUnit: DistanceUnit }) {
+  const [axis, setAxis] = useState<"date" | "odometer">("date");
+  const withData = tires.filter((t) => t.series.length > 0);
+  if (withData.length === 0) {
+    return <p className="rounded border border-dashed border-asphalt-300 p-4 text-asphalt-600">No tread checks yet: the chart appears after the first one.</p>;
+  }
+  const y = (mm: number) => Math.round(mmToDepth(mm, depthUnit) * 100) / 100;
+  const lines = withData.map((t, i) => {
+    const points = t.series
+      .filter((p) => axis === "date" || p.odometerKm != null)
+      .map((p) => ({ x: axis === "date" ? day(p.date) : Math.round(kmToDistance(p.odometerKm as number, distanceUnit)), y: y(p.depthMm) }));
+    const last = points.at(-1);
+    const proj = t.projection;
+    const end =
+      last && proj
+        ? axis === "date"
+          ? proj.projectedDate
+            ? { x: day(proj.projectedDate), y: y(limitMm) }
+            : null
+          : { x: Math.round(kmToDistance(proj.projectedOdometerKm, distanceUnit)), y: y(limitMm) }
+        : null;
+    // Only forward projections are drawn; a tire already at the limit has none to show.
+    const projection = last && end && end.x > last.x ? [last, end] : [];
+    return { tire: t, points, projection, look: LOOK[i % LOOK.length], name: POSITION_LABELS[t.position] };
+  });
+  const unitLabel = depthUnit === "32nds" ? "32nds in" : "mm";
+  const xFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
+
+  return (
+    <figure className="space-y-2">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <figcaption className="text-sm text-asphalt-700">
+          Tread depth ({unitLabel}) of each tire against {axis === "date" ? "the date" : "the odometer"}; the red line is the limit, dashed lines are projections.
+        </figcaption>
+        <div role="group" aria-label="Chart axis" className="inline-flex rounded border border-asphalt-300">
+          {(["date", "odometer"] as const).map((a) => (
+            <button
+              key={a}
+              type="button"
+              aria-pressed={axis === a}
+              onClick={() => setAxis(a)}
+              className={`min-h-11 px-3 text-sm font-semibold ${axis === a ? "bg-groove-700 text-white" : "bg-white text-asphalt-800"}`}
+            >
+              By {a}
+            </button>
+          ))}
+        </div>
+      </div>
+      <div className="h-72 w-full sm:h-96" data-testid="wear-chart">
+        <ResponsiveContainer width="100%" height="100%">
+          <LineChart margin={{ top: 10, right: 16, bottom: 8, left: 0 }}>
+            <CartesianGrid strokeDasharray="3 3" stroke="#d5d9df" />
+            <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} scale={axis === "date" ? "time" : "linear"} tickFormatter={xFormat} tick={{ fontSize: 12 }} allowDuplicatedCategory={false} />
+            <YAxis dataKey="y" type="number" domain={[0, "auto"]} tick={{ fontSize: 12 }} width={40} unit={depthUnit === "mm" ? "" : ""} />
+            <Tooltip labelFormatter={(v) => xFormat(Number(v))} formatter={(v, n) => [`${v} ${unitLabel}`, n]} />
+            <Legend />
+            <ReferenceLine y={y(limitMm)} stroke="#b3141b" strokeWidth={2} label={{ value: `Limit ${y(limitMm)} ${unitLabel}`, position: "insideBottomLeft", fill: "#b3141b", fontSize: 12 }} />
+            {lines.map((l) => (
+              <Line
+                key={l.tire.id}
+                data={l.points}
+                dataKey="y"
+                name={l.name}
+                stroke={l.look.stroke}
+                strokeWidth={2}
+                isAnimationActive={false}
+                dot={(p: { cx?: number; cy?: number; index?: number }) => <Marker key={`${l.tire.id}-${p.index}`} cx={p.cx} cy={p.cy} stroke={l.look.stroke} shape={l.look.shape} />}
+              />
+            ))}
+            {lines
+              .filter((l) => l.projection.length)
+              .map((l) => (
+                <Line
+                  key={`${l.tire.id}-p`}
+                  data={l.projection}
+                  dataKey="y"
+                  name={`${l.name} (projection)`}
+                  stroke={l.look.stroke}
+                  strokeDasharray="6 4"
+                  dot={false}
+                  legendType="none"
+                  isAnimationActive={false}
+                />
+              ))}
+          </LineChart>
+        </ResponsiveContainer>
+      </div>
+    </figure>
+  );
+}
