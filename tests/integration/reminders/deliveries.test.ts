@@ -71,13 +71,15 @@ describe("reminder e-mail run", () => {
     expect(mail.headers?.["List-Unsubscribe-Post"]).toBe("List-Unsubscribe=One-Click");
   });
 
-  it("sends one message per due reminder when two runs overlap", async () => {
+  it("sends one message per due reminder when runs overlap", async () => {
     const u = await plusDriver("Bram Oakes");
-    const [a, b] = await Promise.all([runReminderDeliveries({ now: NOW }), runReminderDeliveries({ now: NOW })]);
-    expect(a.items + b.items).toBe(2);
+    // Three at once (on PostgreSQL through a pool of connections, so truly concurrent).
+    const runs = await Promise.all([runReminderDeliveries({ now: NOW }), runReminderDeliveries({ now: NOW }), runReminderDeliveries({ now: NOW })]);
+    expect(runs.reduce((n, r) => n + r.items, 0)).toBe(2);
     const mails = await mailsTo(u.email);
     const mentioned = mails.flatMap((m) => [...(m.text ?? "").matchAll(/What to do:/g)]).length;
     expect(mentioned).toBe(2);
+    expect(mails.length).toBeGreaterThanOrEqual(1);
     expect(mails.length).toBeLessThanOrEqual(2);
     expect((await deliveriesOf(u.id)).filter((r) => r.status === "sent")).toHaveLength(2);
   });
