@@ -147,5 +147,19 @@ test.describe("a driver subscribes to calendar reminders", () => {
     const events = new ICAL.Component(ICAL.parse(text)).getAllSubcomponents("vevent");
     expect(events).toHaveLength(items.length);
     expect(text).not.toContain("BEGIN:VALARM");
+
+    // Settings: a bad value is named beside its field and nothing typed is lost; a good one is kept.
+    const settings = reminders.settings();
+    await settings.getByLabel("Rotate every (km)").fill("lots");
+    await settings.getByLabel("Fit winter tires on (month-day)").fill("10-01");
+    await reminders.saveSettings();
+    await expect(settings.getByText("Enter a distance in km.")).toBeVisible();
+    await expect(settings.getByLabel("Fit winter tires on (month-day)")).toHaveValue("10-01");
+    await settings.getByLabel("Rotate every (km)").fill("12000");
+    await reminders.saveSettings();
+    await expect(settings.getByText(/^Saved\./)).toBeVisible();
+    await page.reload();
+    await expect(reminders.settings().getByLabel("Rotate every (km)")).toHaveValue("12000");
+    await expect(reminders.settings().getByLabel("Fit winter tires on (month-day)")).toHaveValue("10-01");
   });
 });

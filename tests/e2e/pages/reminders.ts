@@ -45,6 +45,14 @@ export class RemindersPage {
     return this.page.getByRole("img", { name: /QR code of the subscribe address/ });
   }
 
+  settings() {
+    return this.page.getByRole("form", { name: "Reminder settings" });
+  }
+
+  async saveSettings() {
+    await this.settings().getByRole("button", { name: "Save reminder settings" }).click();
+  }
+
   async turnFeedOff() {
     await this.page.getByRole("button", { name: "Turn the feed off" }).click();
     await this.page.getByRole("button", { name: "Yes, turn it off" }).click();
