@@ -25,11 +25,11 @@ const card = { border: "1px solid #d5d9df", borderRadius: 8, padding: "12px 16px
 const small = { fontSize: 14, lineHeight: "20px", color: "#3b4450", margin: "4px 0" } as const;
 
 export default function ReminderDigestEmail({ name, items, remindersUrl, unsubscribeUrl, caution }: ReminderDigestEmailProps) {
-  const count = items.length === 1 ? "One tire date is" : `${items.length} tire dates are`;
+  const count = items.length === 1 ? "One tire date needs" : `${items.length} tire dates need`;
   return (
-    <EmailLayout preview={`${count} coming up in your Fourpatch logbook`} unsubscribeUrl={unsubscribeUrl}>
+    <EmailLayout preview={`${count} your attention in your Fourpatch logbook`} unsubscribeUrl={unsubscribeUrl}>
       <Text style={paragraph}>Hello {name},</Text>
-      <Text style={paragraph}>{count} coming up in your tire logbook:</Text>
+      <Text style={paragraph}>{count} your attention in your tire logbook:</Text>
       {items.map((item) => (
         <Section key={item.url + item.subject} style={card}>
           <Text style={{ ...small, fontWeight: 700, fontSize: 16, color: "#1b1f24" }}>{item.subject}</Text>

@@ -39,7 +39,9 @@ export function ReminderList({ items }: { items: ReminderItem[] }) {
           </div>
           <div className="min-w-0 flex-1 space-y-1">
             <div className="flex flex-wrap items-center gap-2">
-              <p className="font-semibold text-asphalt-950">{item.subject}</p>
+              <p className="font-semibold text-asphalt-950" data-subject>
+                {item.subject}
+              </p>
               <SeverityBadge item={item} />
             </div>
             <p className="text-sm text-asphalt-700">{item.explanation.replace(CAUTION, "").trim()}</p>

@@ -26,6 +26,7 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
     resolver: zodResolver(reminderSettingsFormSchema),
     defaultValues: {
       ...defaults,
+      kinds: plus ? defaults.kinds : defaults.kinds.filter((k) => !PLUS_KINDS.has(k)),
       alarmLeadDays: [0, 1, 2].map((i) => (defaults.alarmLeadDays[i] === undefined ? "" : String(defaults.alarmLeadDays[i]))),
       customDepthMm: defaults.customDepthMm ?? "",
     },
@@ -36,7 +37,9 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
 
   const onSubmit = handleSubmit((values) => {
     start(async () => {
-      const r = await saveReminderSettingsAction(values as never);
+      // On Free the Plus kinds are not in the form; keep what was stored for them.
+      const kinds = plus ? values.kinds : [...values.kinds, ...defaults.kinds.filter((k) => PLUS_KINDS.has(k))];
+      const r = await saveReminderSettingsAction({ ...values, kinds } as never);
       if (r.status === "ok") {
         setResult({
           tone: "success",
@@ -59,12 +62,22 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
           const locked = PLUS_KINDS.has(kind) && !plus;
           return (
             <label key={kind} className="flex min-h-11 items-center gap-3 rounded border border-asphalt-200 px-3 py-2">
-              <input type="checkbox" value={kind} disabled={locked} defaultChecked={defaults.kinds.includes(kind)} {...register("kinds")} className="size-5 accent-groove-700" />
+              {locked ? (
+                // Not part of the form on Free: unticked and inert, while the stored choice waits for Plus.
+                <input type="checkbox" disabled checked={false} readOnly aria-describedby="plus-kinds-note" className="size-5" />
+              ) : (
+                <input type="checkbox" value={kind} defaultChecked={defaults.kinds.includes(kind)} {...register("kinds")} className="size-5 accent-groove-700" />
+              )}
               <span className="flex-1 text-asphalt-900">{REMINDER_KIND_LABELS[kind]}</span>
               {PLUS_KINDS.has(kind) ? <span className="rounded-full bg-groove-50 px-2 py-0.5 text-xs font-semibold text-groove-800">Plus</span> : null}
             </label>
           );
         })}
+        {plus ? null : (
+          <p id="plus-kinds-note" className="text-xs text-asphalt-600">
+            Seasonal swap and rotation reminders come with Plus.
+          </p>
+        )}
       </fieldset>
 
       <div className="grid gap-4 sm:grid-cols-2">

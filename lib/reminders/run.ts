@@ -27,7 +27,11 @@ export type RunOptions = {
   now?: Date;
   /** The sender; tests inject a failing one. */
   send?: (input: SendEmailInput) => Promise<SendEmailResult>;
-  /** Items overdue by more than this many days are not mailed (the page and feed still show them). */
+  /**
+   * Items overdue by more than this many days are not mailed (the page and
+   * the feed still show them). Half a year: a driver who turns e-mail on
+   * hears once about what passed recently, not about every old date.
+   */
   windowDays?: number;
   /** A pending claim older than this is taken over by the next run. */
   retryAfterMinutes?: number;
@@ -35,7 +39,7 @@ export type RunOptions = {
 
 export type RunSummary = { runId: string; drivers: number; emails: number; items: number; cancelled: number; failed: number };
 
-export async function runReminderDeliveries({ now = new Date(), send = sendEmail, windowDays = 30, retryAfterMinutes = 15 }: RunOptions = {}): Promise<RunSummary> {
+export async function runReminderDeliveries({ now = new Date(), send = sendEmail, windowDays = 180, retryAfterMinutes = 15 }: RunOptions = {}): Promise<RunSummary> {
   const runId = randomUUID();
   const summary: RunSummary = { runId, drivers: 0, emails: 0, items: 0, cancelled: 0, failed: 0 };
   const staleBefore = new Date(now.getTime() - retryAfterMinutes * 60_000);
