@@ -3,9 +3,12 @@ import { desc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { fakeOutbox } from "@/db/schema";
 
+/** Stores a message; a repeated idempotency key returns the first message's id and stores nothing. */
 export async function storeFakeEmail({
   message,
+  idempotencyKey,
 }: {
+  idempotencyKey?: string;
   message: {
     from: string;
     to: string[];
@@ -16,6 +19,10 @@ export async function storeFakeEmail({
     tags?: { name: string; value: string }[];
   };
 }): Promise<string> {
+  if (idempotencyKey) {
+    const [seen] = await db.select({ id: fakeOutbox.id }).from(fakeOutbox).where(eq(fakeOutbox.idempotencyKey, idempotencyKey)).limit(1);
+    if (seen) return seen.id;
+  }
   const [row] = await db
     .insert(fakeOutbox)
     .values({
@@ -26,9 +33,14 @@ export async function storeFakeEmail({
       text: message.text,
       headers: message.headers,
       tags: message.tags,
+      idempotencyKey,
     })
+    .onConflictDoNothing({ target: fakeOutbox.idempotencyKey })
     .returning({ id: fakeOutbox.id });
-  return row.id;
+  if (row) return row.id;
+  // Lost a race with the same key: the other request stored it.
+  const [first] = await db.select({ id: fakeOutbox.id }).from(fakeOutbox).where(eq(fakeOutbox.idempotencyKey, idempotencyKey!)).limit(1);
+  return first.id;
 }
 
 export async function listFakeEmails({ to, limit = 100 }: { to?: string; limit?: number }) {

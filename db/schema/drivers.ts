@@ -96,6 +96,8 @@ export const fakeOutbox = pgTable(
     text: text("text"),
     tags: jsonb("tags").$type<{ name: string; value: string }[]>(),
     headers: jsonb("headers").$type<Record<string, string>>(),
+    // The Idempotency-Key the SDK sent: a retry with the same key is the same message.
+    idempotencyKey: text("idempotency_key").unique(),
     createdAt: tz("created_at").notNull().defaultNow(),
   },
   (t) => [index("fake_outbox_created_idx").on(t.createdAt)],

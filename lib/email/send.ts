@@ -42,6 +42,8 @@ export type SendEmailInput = {
   kind: EmailKind;
   /** Per-kind unsubscribe link, added as a List-Unsubscribe header. */
   unsubscribeUrl?: string;
+  /** The same key on a retry makes the provider treat it as the same message. */
+  idempotencyKey?: string;
 };
 
 export type SendEmailResult = { ok: true; id: string } | { ok: false; error: string };
@@ -63,7 +65,7 @@ export async function sendEmail(input: SendEmailInput): Promise<SendEmailResult>
     text,
     headers,
     tags: [{ name: "kind", value: input.kind }],
-  });
+  }, input.idempotencyKey ? { idempotencyKey: input.idempotencyKey } : undefined);
   if (error || !data) return { ok: false, error: error?.message ?? "The e-mail service gave no answer." };
   return { ok: true, id: data.id };
 }

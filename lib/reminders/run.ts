@@ -12,7 +12,7 @@ import "server-only";
 //    claimed_at < cutoff), so nothing is lost; the window is longer than a
 //    send can take, so a slow run is never doubled. A refusal the provider
 //    reports (not an exception) clears the stamp, to be retried next run.
-import { randomUUID } from "node:crypto";
+import { createHash, randomUUID } from "node:crypto";
 import { claimDeliveries, computeFor, driversForDelivery, markDeliveries, reminderProfile } from "@/db/queries/reminders";
 import { conditionLabelFor } from "@/lib/reminders/severity";
 import ReminderDigestEmail from "@/emails/reminder-digest";
@@ -71,7 +71,10 @@ export async function runReminderDeliveries({ now = new Date(), send = sendEmail
       const ids = toSend.map((t) => t.row.id);
       let result: SendEmailResult;
       try {
-        result = await send(digestEmail({ to: profile.email, name: profile.name, userId, items: toSend.map((t) => t.item) }));
+        // A retry of the same claimed rows carries the same key, so a message the
+        // provider accepted just before a crash is not delivered twice.
+        const idempotencyKey = `reminder-digest/${createHash("sha256").update([...ids].sort().join(",")).digest("hex")}`;
+        result = await send({ ...digestEmail({ to: profile.email, name: profile.name, userId, items: toSend.map((t) => t.item) }), idempotencyKey });
       } catch (err) {
         // Unknown whether it went out: keep the claim; the retry window decides.
         await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "failed", error: String(err), retryNow: false } });

@@ -18,8 +18,9 @@ import { renwickStyleLogbook, setPlan } from "../../support/logbook-fixtures";
 import { ctx, request, signUp, type TestUser } from "../../support/users";
 
 // 10 March 2026, 07:00 UTC. With a 14-day e-mail lead and the 180-day window, the
-// known logbook has two due items: the stored winter set's age watch (13 Feb,
-// overdue) and the summer set's rotation (1 Mar, overdue). See feed.test.ts.
+// known logbook has three due items: the stored winter set's age watch (13 Feb,
+// overdue), the summer set's rotation (1 Mar, overdue) and the winter set's
+// autumn swap (15 Oct 2025: still stored in March, so overdue). See feed.test.ts.
 const NOW = new Date("2026-03-10T07:00:00Z");
 const minutesLater = (m: number) => new Date(NOW.getTime() + m * 60_000);
 
@@ -49,7 +50,7 @@ describe("reminder e-mail run", () => {
     const u = await plusDriver("Ilse Varrow");
     const first = await runReminderDeliveries({ now: NOW });
     expect(first.emails).toBe(1);
-    expect(first.items).toBe(2);
+    expect(first.items).toBe(3);
     await runReminderDeliveries({ now: minutesLater(5) });
     await runReminderDeliveries({ now: minutesLater(60 * 24) });
     const mails = await mailsTo(u.email);
@@ -58,10 +59,11 @@ describe("reminder e-mail run", () => {
     expect(rows.map((r) => [r.reminderId.split("/")[2], r.dueOn, r.status]).sort()).toEqual([
       ["age-watch", "2026-02-13", "sent"],
       ["rotation-due", "2026-03-01", "sent"],
+      ["seasonal-swap", "2025-10-15", "sent"],
     ]);
 
     const mail = mails[0];
-    expect(mail.subject).toContain("2 tire reminders");
+    expect(mail.subject).toContain("3 tire reminders");
     expect(mail.text).toContain("Frostvale winter on Blue estate");
     expect(mail.text).toContain("rotation due at 30,000 km");
     expect(mail.text).toContain(CAUTION);
@@ -75,13 +77,13 @@ describe("reminder e-mail run", () => {
     const u = await plusDriver("Bram Oakes");
     // Three at once (on PostgreSQL through a pool of connections, so truly concurrent).
     const runs = await Promise.all([runReminderDeliveries({ now: NOW }), runReminderDeliveries({ now: NOW }), runReminderDeliveries({ now: NOW })]);
-    expect(runs.reduce((n, r) => n + r.items, 0)).toBe(2);
+    expect(runs.reduce((n, r) => n + r.items, 0)).toBe(3);
     const mails = await mailsTo(u.email);
     const mentioned = mails.flatMap((m) => [...(m.text ?? "").matchAll(/What to do:/g)]).length;
-    expect(mentioned).toBe(2);
+    expect(mentioned).toBe(3);
     expect(mails.length).toBeGreaterThanOrEqual(1);
-    expect(mails.length).toBeLessThanOrEqual(2);
-    expect((await deliveriesOf(u.id)).filter((r) => r.status === "sent")).toHaveLength(2);
+    expect(mails.length).toBeLessThanOrEqual(3);
+    expect((await deliveriesOf(u.id)).filter((r) => r.status === "sent")).toHaveLength(3);
   });
 
   it("loses nothing and duplicates nothing when a run dies between claiming and sending", async () => {
@@ -96,7 +98,7 @@ describe("reminder e-mail run", () => {
     expect(crashed.failed).toBe(1);
     expect(await mailsTo(u.email)).toHaveLength(0);
     const pending = await deliveriesOf(u.id);
-    expect(pending.map((r) => r.status)).toEqual(["pending", "pending"]);
+    expect(pending.map((r) => r.status)).toEqual(["pending", "pending", "pending"]);
     expect(pending.every((r) => r.lastError?.includes("simulated"))).toBe(true);
 
     // Inside the retry window the claim stands: a second run must not send what the first may have sent.
@@ -105,11 +107,34 @@ describe("reminder e-mail run", () => {
 
     // After the window the next run takes the rows over and sends them once.
     const retry = await runReminderDeliveries({ now: minutesLater(20), send: crashOnce });
-    expect(retry.items).toBe(2);
+    expect(retry.items).toBe(3);
     await runReminderDeliveries({ now: minutesLater(40), send: crashOnce });
     expect(await mailsTo(u.email)).toHaveLength(1);
     const rows = await deliveriesOf(u.id);
     expect(rows.every((r) => r.status === "sent" && r.attempts === 2)).toBe(true);
+  });
+
+  it("a message the provider accepted just before a crash is not delivered twice (same idempotency key on the retry)", async () => {
+    const u = await plusDriver("Della Marsh-Ivo");
+    let calls = 0;
+    const keys: (string | undefined)[] = [];
+    const sentThenCrash = async (input: Parameters<typeof sendEmail>[0]) => {
+      calls += 1;
+      keys.push(input.idempotencyKey);
+      const res = await sendEmail(input);
+      if (calls === 1) throw new Error("process killed after the provider accepted (simulated)");
+      return res;
+    };
+    await runReminderDeliveries({ now: NOW, send: sentThenCrash });
+    expect(await mailsTo(u.email)).toHaveLength(1);
+    const retry = await runReminderDeliveries({ now: minutesLater(20), send: sentThenCrash });
+    expect(retry.emails).toBe(1);
+    expect(keys).toHaveLength(2);
+    expect(keys[0]).toMatch(/^reminder-digest\/[0-9a-f]{64}$/);
+    expect(keys[1]).toBe(keys[0]);
+    // The fake, like the real API, answers a repeated key with the first message.
+    expect(await mailsTo(u.email)).toHaveLength(1);
+    expect((await deliveriesOf(u.id)).every((r) => r.status === "sent")).toBe(true);
   });
 
   it("retries at once after a refusal the provider reported, then stops", async () => {

@@ -27,6 +27,6 @@ export async function POST(req: Request) {
   if (!parsed.success) {
     return NextResponse.json({ name: "validation_error", message: parsed.error.issues[0]?.message ?? "Invalid" }, { status: 422 });
   }
-  const id = await storeFakeEmail({ message: parsed.data });
+  const id = await storeFakeEmail({ message: parsed.data, idempotencyKey: req.headers.get("idempotency-key") ?? undefined });
   return NextResponse.json({ id });
 }
