@@ -119,3 +119,4 @@ export {
   type TreadCheckInput,
   type VehicleInput,
 } from "./reminders";
+export { coinDepth, coinLabel, COIN_RESULTS, COIN_SOURCE, type CoinResult } from "./coin";
