@@ -1,11 +1,15 @@
 // Loads the invented demo scenario. Dates are relative to `today`, so the
 // conditions and reminders stay interesting whenever the demo is loaded.
 import { seedAccounts, type DemoIds } from "./seed/accounts";
+import { seedPasses } from "./seed/passes";
 
 export type SeedContext = { ids: DemoIds; today: string };
 
 /** Each area of the product adds its part of the scenario here, in order. */
-const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [];
+const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [
+  // After the logbook part: it gives the shop passes to Ada's vehicles.
+  { name: "passes", run: async (ctx) => void (await seedPasses(ctx)) },
+];
 
 export async function seedDemo({ today }: { today: string }): Promise<SeedContext> {
   const ids = await seedAccounts();
