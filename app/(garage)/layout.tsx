@@ -2,6 +2,7 @@ import { redirect } from "next/navigation";
 import type { ReactNode } from "react";
 import { AppShell } from "@/components/shell/app-shell";
 import { getSession } from "@/lib/auth/session";
+import { GarageProviders } from "./providers";
 
 // Every account owns a garage: drivers, shop staff and operators alike keep
 // their own tires here. Only signed-out visitors are turned away.
@@ -21,7 +22,7 @@ export default async function GarageLayout({ children }: { children: ReactNode }
         { href: "/garage/account", label: "Account" },
       ]}
     >
-      {children}
+      <GarageProviders>{children}</GarageProviders>
     </AppShell>
   );
 }

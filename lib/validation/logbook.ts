@@ -31,7 +31,7 @@ const optNumber = (min: number, max: number, what: string) =>
       .optional(),
   );
 
-const bool = z.preprocess((v) => v === true || v === "true" || v === "on" || v === "1", z.boolean());
+const bool = z.preprocess((v) => v === true || v === "true" || v === "on" || v === "1" || v === "yes", z.boolean());
 
 export const isoDate = z.string().refine(isIsoDate, "Enter a date as YYYY-MM-DD.");
 const optDate = z.preprocess(blank, isoDate.optional());

@@ -1,25 +1,132 @@
+import { CalendarClock, Gauge, Plus, Warehouse } from "lucide-react";
 import Link from "next/link";
+import { redirect } from "next/navigation";
+import { formatDate, setTitle } from "@/components/logbook/format";
 import { buttonVariants } from "@/components/ui/button-variants";
+import { Card } from "@/components/ui/card";
+import { ConditionBadge } from "@/components/ui/condition-badge";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
+import { listGarage } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
+import { distanceUnitFor, formatDistance } from "@/lib/units";
+import { todayIso } from "@/lib/validation/logbook";
 
 export const dynamic = "force-dynamic";
 
 export default async function GaragePage() {
   const session = await getSession();
+  if (!session) redirect("/sign-in?next=/garage");
+  const { vehicles, prefs } = await listGarage({ userId: session.user.id, today: todayIso() });
+  const unit = distanceUnitFor(prefs.units);
   return (
     <>
       <PageHeader
-        title={`${session?.user.name.split(" ")[0] ?? "Your"}'s garage`}
+        title={`${session.user.name.split(" ")[0] ?? "Your"}'s garage`}
         description="Your vehicles, the tires on them and the ones in storage."
         actions={
-          <Link href="/garage/log-purchase" className={buttonVariants()}>
-            Log a tire purchase
-          </Link>
+          <>
+            <Link href="/garage/log-purchase" className={buttonVariants()}>
+              Log a tire purchase
+            </Link>
+            <Link href="/garage/vehicles/new" className={buttonVariants({ variant: "secondary" })}>
+              <Plus aria-hidden className="size-4" /> Add a vehicle
+            </Link>
+          </>
         }
       />
-      <p className="mb-6 text-asphalt-600">No vehicles yet. Add one when you log your first set of tires.</p>
+      {vehicles.length === 0 ? (
+        <Card className="mb-6">
+          <p className="text-asphalt-700">No vehicles yet. Add one, or add it while you log your first set of tires.</p>
+        </Card>
+      ) : (
+        <ul className="mb-6 grid gap-4 md:grid-cols-2">
+          {vehicles.map((v) => (
+            <li key={v.id}>
+              <Card className="h-full space-y-3">
+                <div className="flex items-start justify-between gap-2">
+                  <div>
+                    <h2 className="text-lg font-bold">
+                      <Link href={`/garage/vehicles/${v.id}`} className="text-asphalt-950 underline-offset-4 hover:underline">
+                        {v.nickname}
+                      </Link>
+                    </h2>
+                    <p className="text-sm text-asphalt-600">
+                      {v.make} {v.model}
+                      {v.year ? ` · ${v.year}` : ""}
+                    </p>
+                  </div>
+                  {v.mountedSet?.condition ? <ConditionBadge condition={v.mountedSet.condition} /> : null}
+                </div>
+                <dl className="space-y-2 text-sm">
+                  <div className="flex gap-2">
+                    <dt className="sr-only">On the car</dt>
+                    <Gauge aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    <dd>
+                      {v.mountedSet ? (
+                        <>
+                          On the car: <Link href={`/garage/sets/${v.mountedSet.id}`}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
+                        </>
+                      ) : (
+                        <>No set on the car in the logbook.</>
+                      )}
+                    </dd>
+                  </div>
+                  <div className="flex gap-2">
+                    <dt className="sr-only">Next reminder</dt>
+                    <CalendarClock aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    <dd>
+                      {v.nextReminder ? (
+                        <>
+                          Next: <strong>{formatDate(v.nextReminder.date)}</strong> — {v.nextReminder.subject}
+                          {v.nextReminder.overdue ? <span className="font-semibold text-condition-replace"> (overdue)</span> : null}
+                        </>
+                      ) : (
+                        "No reminder yet: log the tires' DOT codes and a tread check."
+                      )}
+                    </dd>
+                  </div>
+                  <div className="flex gap-2">
+                    <dt className="sr-only">Last tread check</dt>
+                    <Gauge aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    <dd>
+                      {v.lastCheck ? (
+                        <>
+                          Last check {formatDate(v.lastCheck.date)}
+                          {v.lastCheck.odometerKm != null ? ` at ${formatDistance(v.lastCheck.odometerKm, unit)}` : ""}
+                        </>
+                      ) : (
+                        "No tread check yet."
+                      )}
+                    </dd>
+                  </div>
+                  {v.storedSets.map((s) => (
+                    <div key={s.id} className="flex gap-2">
+                      <dt className="sr-only">Stored</dt>
+                      <Warehouse aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                      <dd className="flex flex-wrap items-center gap-2">
+                        <span>
+                          Stored: <Link href={`/garage/sets/${s.id}`}>{setTitle(s)}</Link>
+                          {s.storageLocation ? ` at ${s.storageLocation}` : ""}
+                        </span>
+                        {s.condition ? <ConditionBadge condition={s.condition} className="text-xs" /> : null}
+                      </dd>
+                    </div>
+                  ))}
+                </dl>
+                <div className="flex flex-wrap gap-2 pt-1">
+                  <Link href={`/garage/vehicles/${v.id}/check`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
+                    Record a tread check
+                  </Link>
+                  <Link href={`/garage/vehicles/${v.id}`} className={buttonVariants({ variant: "ghost", size: "sm" })}>
+                    Open the logbook
+                  </Link>
+                </div>
+              </Card>
+            </li>
+          ))}
+        </ul>
+      )}
       <SafetyNote />
     </>
   );

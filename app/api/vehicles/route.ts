@@ -1,0 +1,13 @@
+// The signed-in driver's garage: list (with conditions and next reminders) and add a vehicle.
+import { created, parseJson, route } from "@/lib/api/handler";
+import { listGarage } from "@/db/queries/logbook";
+import { createVehicle } from "@/db/queries/vehicles";
+import { todayIso, vehicleSchema } from "@/lib/validation/logbook";
+
+export const GET = route(async ({ session }) => listGarage({ userId: session!.user.id, today: todayIso() }));
+
+export const POST = route(async ({ req, session }) => {
+  const input = await parseJson(req, vehicleSchema);
+  const v = await createVehicle({ userId: session!.user.id, input });
+  return created({ vehicle: v });
+});

@@ -1,0 +1,74 @@
+"use client";
+// The browser side of the logbook API: one fetch helper that turns the API's
+// error shape into an exception carrying the per-field messages, and the
+// cache keys of each resource.
+import type { ApiErrorBody, ErrorCode, FieldErrors } from "@/lib/errors";
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode | "network",
+    message: string,
+    readonly fields: FieldErrors = {},
+  ) {
+    super(message);
+  }
+}
+
+export async function api<T>(url: string, opts: { method?: string; body?: unknown } = {}): Promise<T> {
+  let res: Response;
+  try {
+    res = await fetch(url, {
+      method: opts.method ?? (opts.body === undefined ? "GET" : "POST"),
+      headers: opts.body === undefined ? undefined : { "content-type": "application/json" },
+      body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
+      credentials: "same-origin",
+    });
+  } catch {
+    throw new ApiError(0, "network", "The connection dropped. Nothing was saved; check your signal and try again.");
+  }
+  const data = (await res.json().catch(() => null)) as unknown;
+  if (!res.ok) {
+    const e = (data as ApiErrorBody | null)?.error;
+    throw new ApiError(res.status, e?.code ?? "internal", e?.message ?? `The server answered ${res.status}. Nothing was saved.`, e?.fields ?? {});
+  }
+  return data as T;
+}
+
+/** Uploads one file with progress (fetch cannot report upload progress; XMLHttpRequest can). */
+export function uploadFile(
+  url: string,
+  file: File,
+  fields: Record<string, string>,
+  onProgress: (fraction: number) => void,
+): Promise<{ attachment: { id: string; fileName: string; mimeType: string; sizeBytes: number } }> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open("POST", url);
+    xhr.responseType = "json";
+    xhr.upload.onprogress = (e) => {
+      if (e.lengthComputable) onProgress(e.loaded / e.total);
+    };
+    xhr.onerror = () => reject(new ApiError(0, "network", "The upload was interrupted. Try again."));
+    xhr.onload = () => {
+      const body = xhr.response as (ApiErrorBody & { attachment?: never }) | { attachment: { id: string; fileName: string; mimeType: string; sizeBytes: number } } | null;
+      if (xhr.status >= 200 && xhr.status < 300 && body && "attachment" in body) {
+        onProgress(1);
+        resolve(body as { attachment: { id: string; fileName: string; mimeType: string; sizeBytes: number } });
+      } else {
+        const e = (body as ApiErrorBody | null)?.error;
+        reject(new ApiError(xhr.status, e?.code ?? "internal", e?.message ?? `The upload failed (${xhr.status}).`, e?.fields ?? {}));
+      }
+    };
+    const form = new FormData();
+    form.set("file", file);
+    for (const [k, v] of Object.entries(fields)) form.set(k, v);
+    xhr.send(form);
+  });
+}
+
+export const keys = {
+  garage: ["garage"] as const,
+  vehicle: (id: string) => ["vehicle", id] as const,
+  set: (id: string) => ["set", id] as const,
+};

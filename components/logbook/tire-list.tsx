@@ -1,0 +1,72 @@
+// A set's tires: position, DOT week, age, depth and condition, as a list
+// that reads on a phone and as a grid on a desktop.
+import { ConditionBadge } from "@/components/ui/condition-badge";
+import type { TireView } from "@/db/queries/logbook-view";
+import { formatDepth, type DepthUnit } from "@/lib/units";
+import { POSITION_LABELS } from "@/lib/validation/logbook";
+import { formatAge, formatDate } from "./format";
+
+export function TireList({ tires, depthUnit, showPattern = false }: { tires: TireView[]; depthUnit: DepthUnit; showPattern?: boolean }) {
+  if (tires.length === 0) return <p className="text-sm text-asphalt-600">No tires recorded for this set.</p>;
+  return (
+    <ul className="grid gap-2 sm:grid-cols-2" aria-label="Tires">
+      {tires.map((t) => (
+        <li key={t.id} className="rounded border border-asphalt-200 p-3 text-sm" data-testid="tire">
+          <div className="flex flex-wrap items-center justify-between gap-2">
+            <span className="font-semibold">{POSITION_LABELS[t.position]}</span>
+            {t.condition ? <ConditionBadge condition={t.condition} /> : <span className="text-asphalt-600">No condition yet</span>}
+          </div>
+          <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
+            <dt className="text-asphalt-600">DOT</dt>
+            <dd className="font-mono">{t.dotCode ?? "not recorded"}</dd>
+            <dt className="text-asphalt-600">Made</dt>
+            <dd>{t.dot?.ok ? `week ${t.dot.week} of ${t.dot.year} (from ${formatDate(t.dot.weekStart)})` : t.dot ? t.dot.error : "unknown"}</dd>
+            <dt className="text-asphalt-600">Age</dt>
+            <dd>
+              {formatAge(t.age)}
+              {t.replaceFrom ? <span className="text-asphalt-600"> · replace by {formatDate(t.replaceFrom)}</span> : null}
+            </dd>
+            <dt className="text-asphalt-600">Depth</dt>
+            <dd>
+              {t.latest ? (
+                <>
+                  {t.latest.approximate ? "about " : ""}
+                  {formatDepth(t.depthMm, depthUnit)} on {formatDate(t.latest.checkedOn)}
+                </>
+              ) : t.depthMm != null ? (
+                <>{formatDepth(t.depthMm, depthUnit)} when new</>
+              ) : (
+                "no check yet"
+              )}
+            </dd>
+            {showPattern && t.pattern ? (
+              <>
+                <dt className="text-asphalt-600">Wear</dt>
+                <dd>
+                  <span className="font-semibold">{PATTERN_LABEL[t.pattern.kind]}.</span> {t.pattern.likelyCause} {t.pattern.advice}
+                </dd>
+              </>
+            ) : null}
+            {showPattern && t.projection ? (
+              <>
+                <dt className="text-asphalt-600">Limit</dt>
+                <dd>
+                  {t.projection.projectedDate ? `reached around ${formatDate(t.projection.projectedDate)}` : "no date yet"}
+                  {t.projection.method === "typical-rate" ? " (estimated from a typical wear rate)" : ` (confidence: ${t.projection.confidence})`}
+                </dd>
+              </>
+            ) : null}
+          </dl>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+export const PATTERN_LABEL: Record<NonNullable<TireView["pattern"]>["kind"], string> = {
+  even: "Even wear",
+  "under-inflation": "Worn on both shoulders",
+  "over-inflation": "Worn in the centre",
+  "inner-shoulder": "Worn on the inner shoulder",
+  "outer-shoulder": "Worn on the outer shoulder",
+};

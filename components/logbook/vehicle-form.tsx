@@ -1,0 +1,115 @@
+"use client";
+// Adding (or changing) a vehicle: the same zod schema as the API.
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { Card } from "@/components/ui/card";
+import { Field, Input, Select } from "@/components/ui/field";
+import { validateVin } from "@/lib/tires";
+import type { PressureUnit } from "@/lib/units";
+import { vehicleSchema } from "@/lib/validation/logbook";
+import { api, ApiError, keys } from "./api";
+import { SizePreview } from "./live-decode";
+
+type Values = {
+  nickname: string;
+  make: string;
+  model: string;
+  year: string;
+  vin: string;
+  plate: string;
+  placardFrontSize: string;
+  placardRearSize: string;
+  placardFrontPressure: string;
+  placardRearPressure: string;
+  pressureUnit: PressureUnit;
+  odometerUnit: "km" | "mi";
+};
+
+export function VehicleForm({ pressureUnit, odometerUnit, then }: { pressureUnit: PressureUnit; odometerUnit: "km" | "mi"; then?: "log-purchase" }) {
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const [error, setError] = useState<string | null>(null);
+  const form = useForm<Values>({
+    resolver: zodResolver(vehicleSchema) as unknown as Resolver<Values>,
+    mode: "onTouched",
+    defaultValues: { nickname: "", make: "", model: "", year: "", vin: "", plate: "", placardFrontSize: "", placardRearSize: "", placardFrontPressure: "", placardRearPressure: "", pressureUnit, odometerUnit },
+  });
+  const { register, formState } = form;
+  const w = useWatch({ control: form.control });
+  const e = (k: keyof Values) => formState.errors[k]?.message;
+  const vinCheck = w.vin && w.vin.trim().length === 17 ? validateVin(w.vin) : null;
+
+  const text = (name: keyof Values, label: string, opts: { hint?: string; inputMode?: "numeric" | "decimal"; autoComplete?: string } = {}) => (
+    <Field label={label} hint={opts.hint} error={e(name)}>
+      {({ id, describedBy, invalid }) => <Input id={id} aria-describedby={describedBy} aria-invalid={invalid} inputMode={opts.inputMode} autoComplete={opts.autoComplete ?? "off"} {...register(name)} />}
+    </Field>
+  );
+
+  return (
+    <form
+      noValidate
+      className="space-y-4"
+      onSubmit={form.handleSubmit(async (values) => {
+        setError(null);
+        try {
+          const res = await api<{ vehicle: { id: string } }>("/api/vehicles", { body: values });
+          await queryClient.invalidateQueries({ queryKey: keys.garage });
+          router.push(then === "log-purchase" ? `/garage/log-purchase?vehicle=${res.vehicle.id}` : `/garage/vehicles/${res.vehicle.id}`);
+          router.refresh();
+        } catch (err) {
+          if (err instanceof ApiError) {
+            for (const [k, m] of Object.entries(err.fields)) form.setError(k as Path<Values>, { message: m[0] });
+            setError(err.message);
+          } else setError("Something went wrong. Nothing was saved.");
+        }
+      })}
+    >
+      {error ? <Alert tone="error">{error}</Alert> : null}
+      <Card className="grid gap-3 sm:grid-cols-2">
+        {text("nickname", "Name for the vehicle", { hint: "How you call it at home, for example “The blue one”." })}
+        {text("make", "Make")}
+        {text("model", "Model")}
+        {text("year", "Year (optional)", { inputMode: "numeric" })}
+        {text("plate", "Plate (optional)")}
+        <div>
+          {text("vin", "VIN (optional)", { hint: "17 letters and digits, on the registration document." })}
+          {vinCheck?.ok && vinCheck.warnings.length ? <p className="mt-1 text-sm text-condition-watch">{vinCheck.warnings.join(" ")}</p> : null}
+        </div>
+      </Card>
+      <Card className="grid gap-3 sm:grid-cols-2">
+        <div>
+          {text("placardFrontSize", "Placard tire size, front", { hint: "On the sticker in the driver's door frame." })}
+          {w.placardFrontSize ? <SizePreview size={w.placardFrontSize} placard={undefined} winter={false} /> : null}
+        </div>
+        {text("placardRearSize", "Placard tire size, rear (if different)")}
+        <Field label="Pressure unit" error={e("pressureUnit")}>
+          {({ id }) => (
+            <Select id={id} {...register("pressureUnit")}>
+              <option value="kpa">kPa</option>
+              <option value="psi">psi</option>
+              <option value="bar">bar</option>
+            </Select>
+          )}
+        </Field>
+        <Field label="Odometer shows" error={e("odometerUnit")}>
+          {({ id }) => (
+            <Select id={id} {...register("odometerUnit")}>
+              <option value="km">kilometres</option>
+              <option value="mi">miles</option>
+            </Select>
+          )}
+        </Field>
+        {text("placardFrontPressure", "Placard pressure, front", { inputMode: "decimal" })}
+        {text("placardRearPressure", "Placard pressure, rear", { inputMode: "decimal" })}
+      </Card>
+      <Button type="submit" size="lg" className="w-full sm:w-auto" pending={formState.isSubmitting} pendingLabel="Saving the vehicle…">
+        Save the vehicle
+      </Button>
+    </form>
+  );
+}

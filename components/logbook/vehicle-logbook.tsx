@@ -1,0 +1,245 @@
+"use client";
+// One vehicle's logbook: its sets (with the seasonal swap), files, history
+// and the shops' access log. Data through TanStack Query, seeded by the server.
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { FileText, Image as ImageIcon } from "lucide-react";
+import Link from "next/link";
+import { useState } from "react";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { buttonVariants } from "@/components/ui/button-variants";
+import { Card, CardTitle } from "@/components/ui/card";
+import { ConditionBadge } from "@/components/ui/condition-badge";
+import { Field, Input } from "@/components/ui/field";
+import { PageHeader } from "@/components/ui/page-header";
+import { SafetyNote } from "@/components/ui/safety-note";
+import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
+import { depthUnitFor, formatDistance } from "@/lib/units";
+import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
+import { api, ApiError, keys } from "./api";
+import { formatBytes, formatDate, formatMoney, setTitle } from "./format";
+import { HistoryTable, historyRows } from "./history-table";
+import { TireList } from "./tire-list";
+
+export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook; saved?: string }) {
+  const id = initial.vehicle.id;
+  const { data } = useQuery({ queryKey: keys.vehicle(id), queryFn: () => api<VehicleLogbook>(`/api/vehicles/${id}`), initialData: initial });
+  const book = data ?? initial;
+  const v = book.vehicle;
+  const depthUnit = depthUnitFor(book.viewer.units);
+  const distanceUnit = v.odometerUnit;
+  const mounted = book.sets.find((s) => s.state === "mounted") ?? null;
+
+  return (
+    <>
+      <PageHeader
+        title={v.nickname}
+        description={`${v.make} ${v.model}${v.year ? ` · ${v.year}` : ""}${v.plate ? ` · ${v.plate}` : ""}${book.lastOdometer ? ` · ${formatDistance(book.lastOdometer.odometerKm, distanceUnit)} on ${formatDate(book.lastOdometer.date)}` : ""}`}
+        actions={
+          <>
+            <Link href={`/garage/vehicles/${id}/check`} className={buttonVariants()}>
+              Record a tread check
+            </Link>
+            <Link href={`/garage/log-purchase?vehicle=${id}`} className={buttonVariants({ variant: "secondary" })}>
+              Log a purchase
+            </Link>
+          </>
+        }
+      />
+      {saved === "set" ? <Alert tone="success" className="mb-4">The new set is saved in the logbook.</Alert> : null}
+      {saved === "check" ? <Alert tone="success" className="mb-4">The tread check is saved.</Alert> : null}
+
+      <section aria-labelledby="sets-h" className="mb-8 space-y-4">
+        <h2 id="sets-h" className="text-xl font-bold">
+          Tire sets
+        </h2>
+        {book.sets.length === 0 ? (
+          <Card>
+            <p>No sets yet. <Link href={`/garage/log-purchase?vehicle=${id}`}>Log the tires on this vehicle</Link>.</p>
+          </Card>
+        ) : null}
+        {book.sets.map((s) => (
+          <SetCard key={s.id} set={s} vehicleId={id} mounted={mounted} depthUnit={depthUnit} files={book.attachments.filter((a) => a.setId === s.id)} />
+        ))}
+        <SafetyNote compact />
+      </section>
+
+      <section aria-labelledby="history-h" className="mb-8 space-y-3">
+        <h2 id="history-h" className="text-xl font-bold">
+          History
+        </h2>
+        <HistoryTable rows={historyRows(book, depthUnit)} distanceUnit={distanceUnit} />
+      </section>
+
+      <section aria-labelledby="files-h" className="mb-8 space-y-3">
+        <h2 id="files-h" className="text-xl font-bold">
+          Receipts and photos
+        </h2>
+        {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} />}
+      </section>
+
+      {book.accessLog !== undefined ? (
+        <section aria-labelledby="log-h" className="mb-8 space-y-3">
+          <h2 id="log-h" className="text-xl font-bold">
+            Who looked at this logbook
+          </h2>
+          {book.accessLog.length === 0 ? (
+            <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/garage/passes">Shop passes</Link>.</p>
+          ) : (
+            <div className="overflow-x-auto rounded border border-asphalt-200">
+              <table className="w-full min-w-[32rem] text-left text-sm">
+                <thead className="bg-asphalt-100">
+                  <tr>
+                    <th scope="col" className="px-3 py-2">When</th>
+                    <th scope="col" className="px-3 py-2">Who</th>
+                    <th scope="col" className="px-3 py-2">What</th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {book.accessLog.map((l) => (
+                    <tr key={l.id} className="border-t border-asphalt-200">
+                      <td className="px-3 py-2 whitespace-nowrap">{formatDate(l.at)} {l.at.slice(11, 16)} UTC</td>
+                      <td className="px-3 py-2">
+                        {l.actorName}, {l.shopName}
+                      </td>
+                      <td className="px-3 py-2">{ACTION_LABEL[l.action] ?? l.action}{l.detail ? ` — ${l.detail}` : ""}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          )}
+        </section>
+      ) : null}
+    </>
+  );
+}
+
+const ACTION_LABEL: Record<string, string> = {
+  read_logbook: "Opened the logbook",
+  read_set: "Opened a set",
+  add_check: "Added a tread check",
+  add_service: "Added a service entry",
+  add_set: "Logged a set",
+  swap_set: "Swapped sets",
+  upload: "Uploaded a file",
+  download: "Opened a file",
+};
+
+function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; vehicleId: string; mounted: SetView | null; depthUnit: "mm" | "32nds"; files: VehicleLogbook["attachments"] }) {
+  const state =
+    set.state === "mounted" ? "On the car" : set.state === "stored" ? `Stored${set.storageLocation ? ` at ${set.storageLocation}` : ""}` : "Retired";
+  return (
+    <Card className="space-y-3" data-testid="set-card">
+      <div className="flex flex-wrap items-start justify-between gap-2">
+        <div>
+          <h3 className="text-lg font-bold">
+            <Link href={`/garage/sets/${set.id}`}>{setTitle(set)}</Link>
+          </h3>
+          <p className="text-sm text-asphalt-600">
+            {SET_KIND_LABELS[set.kind]} · {set.size} · {state}
+            {set.purchasedOn ? ` · bought ${formatDate(set.purchasedOn)}` : ""}
+            {set.seller ? ` from ${set.seller}` : ""}
+            {set.priceCents != null ? ` · ${formatMoney(set.priceCents, set.currency)}` : ""}
+          </p>
+        </div>
+        {set.condition ? <ConditionBadge condition={set.condition} detail="set" /> : null}
+      </div>
+      <TireList tires={set.tires} depthUnit={depthUnit} />
+      {set.axleAdvice.length ? (
+        <ul className="list-disc pl-5 text-sm text-asphalt-700">
+          {set.axleAdvice.map((a) => (
+            <li key={a}>{a}</li>
+          ))}
+        </ul>
+      ) : null}
+      {files.length ? <FileList files={files} /> : null}
+      <div className="flex flex-wrap gap-2">
+        <Link href={`/garage/sets/${set.id}`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
+          Wear chart and details
+        </Link>
+        {set.state === "stored" ? <SwapControl set={set} vehicleId={vehicleId} mounted={mounted} /> : null}
+      </div>
+    </Card>
+  );
+}
+
+function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: string; mounted: SetView | null }) {
+  const queryClient = useQueryClient();
+  const [open, setOpen] = useState(false);
+  const [storage, setStorage] = useState(set.storageLocation ?? "");
+  const [date, setDate] = useState(todayIso());
+  const [odometer, setOdometer] = useState("");
+  const [confirmLower, setConfirmLower] = useState(false);
+  const swap = useMutation({
+    mutationFn: () => api(`/api/vehicles/${vehicleId}/swap`, { body: { setId: set.id, storageLocation: storage, date, odometer, confirmLowerOdometer: confirmLower } }),
+    onSuccess: async () => {
+      setOpen(false);
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }),
+        queryClient.invalidateQueries({ queryKey: keys.garage }),
+      ]);
+    },
+  });
+  const err = swap.error instanceof ApiError ? swap.error : null;
+  if (!open) {
+    return (
+      <Button type="button" size="sm" onClick={() => setOpen(true)}>
+        Put this set on the car
+      </Button>
+    );
+  }
+  return (
+    <form
+      className="w-full space-y-3 rounded border border-groove-200 bg-groove-50 p-3"
+      onSubmit={(e) => {
+        e.preventDefault();
+        swap.mutate();
+      }}
+    >
+      <p className="font-semibold">Seasonal swap: {setTitle(set)} goes on the car{mounted ? `, ${setTitle(mounted)} comes off` : ""}.</p>
+      {err ? <Alert tone="error">{err.message}</Alert> : null}
+      <div className="grid gap-3 sm:grid-cols-3">
+        <Field label={mounted ? `Where ${setTitle(mounted)} will be kept` : "Where the set coming off is kept"} error={err?.fields.storageLocation}>
+          {({ id, describedBy, invalid }) => <Input id={id} aria-describedby={describedBy} aria-invalid={invalid} value={storage} onChange={(e) => setStorage(e.target.value)} />}
+        </Field>
+        <Field label="Date" error={err?.fields.date}>
+          {({ id, describedBy, invalid }) => <Input id={id} type="date" max={todayIso()} aria-describedby={describedBy} aria-invalid={invalid} value={date} onChange={(e) => setDate(e.target.value)} />}
+        </Field>
+        <Field label="Odometer (optional)" error={err?.fields.odometer}>
+          {({ id, describedBy, invalid }) => <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} value={odometer} onChange={(e) => setOdometer(e.target.value)} />}
+        </Field>
+      </div>
+      {err?.code === "conflict" && err.fields.odometer ? (
+        <label className="flex min-h-11 items-center gap-2">
+          <input type="checkbox" className="size-5" checked={confirmLower} onChange={(e) => setConfirmLower(e.target.checked)} /> The lower reading is right
+        </label>
+      ) : null}
+      <div className="flex gap-2">
+        <Button type="submit" size="sm" pending={swap.isPending} pendingLabel="Swapping…">
+          Save the swap
+        </Button>
+        <Button type="button" size="sm" variant="ghost" onClick={() => setOpen(false)}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}
+
+function FileList({ files }: { files: VehicleLogbook["attachments"] }) {
+  return (
+    <ul className="flex flex-wrap gap-2" aria-label="Files">
+      {files.map((f) => (
+        <li key={f.id}>
+          <a href={`/api/attachments/${f.id}`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center gap-2 rounded border border-asphalt-200 bg-white px-3 text-sm">
+            {f.mimeType.startsWith("image/") ? <ImageIcon aria-hidden className="size-4" /> : <FileText aria-hidden className="size-4" />}
+            <span>
+              {f.kind === "receipt" ? "Receipt" : f.kind === "photo" ? "Photo" : "Document"}: {f.fileName} <span className="text-asphalt-600">({formatBytes(f.sizeBytes)})</span>
+            </span>
+          </a>
+        </li>
+      ))}
+    </ul>
+  );
+}
