@@ -81,7 +81,7 @@ test("a driver shares a logbook with a shop, the technician adds to it, and the 
   await techCtx.close();
 });
 
-test("the shop's list shows open passes first; a view-only pass offers no form", async ({ page }) => {
+test("the shop owner sees the shop's passes, its profile and its staff", async ({ page }) => {
   await new SessionPages(page).signInAndLand(demoAccounts.wren.email, "/shop");
   await expect(page.getByRole("heading", { name: "Passes at Quillby Tread Works" })).toBeVisible();
   await page.goto("/shop/profile");

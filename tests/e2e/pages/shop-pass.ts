@@ -77,10 +77,15 @@ export class ShopWorkspacePage {
     await this.page.getByLabel(`${position} outer depth in mm`).fill(outer);
   }
 
+  workForm() {
+    return this.page.locator("form").filter({ has: this.page.getByRole("heading", { name: "Record work" }) });
+  }
+
   async recordWork(kind: string, odometer: string, notes: string) {
-    await this.page.getByLabel("Work done").selectOption({ label: kind });
-    await this.page.getByLabel("Odometer (km)").fill(odometer);
-    await this.page.getByLabel("Notes for the driver (optional)").fill(notes);
-    await this.page.getByRole("button", { name: "Save to the driver's logbook" }).click();
+    const form = this.workForm();
+    await form.getByLabel("Work done").selectOption({ label: kind });
+    await form.getByLabel("Odometer (km)").fill(odometer);
+    await form.getByLabel("Notes for the driver (optional)").fill(notes);
+    await form.getByRole("button", { name: "Save to the driver's logbook" }).click();
   }
 }
