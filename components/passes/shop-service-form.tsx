@@ -24,6 +24,7 @@ export type ShopFormContext = {
 };
 
 const PRESSURE_LABEL = { kpa: "kPa", psi: "psi", bar: "bar" } as const;
+const GROOVE_LABEL = { inner: "Inner", centre: "Centre", outer: "Outer" } as const;
 
 export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnded?: (message: string) => void }) {
   const router = useRouter();
@@ -133,15 +134,20 @@ export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnde
             Tread check of {ctx.set.label}
           </label>
           {withCheck ? (
+            <p className="text-sm text-asphalt-600">
+              Depth of each groove in {depthLabel === "mm" ? "mm" : "32nds of an inch"}, pressure in {PRESSURE_LABEL[ctx.pressureUnit]}. Leave a tire empty to skip it.
+            </p>
+          ) : null}
+          {withCheck ? (
             <div className="grid gap-3 md:grid-cols-2">
               {ctx.set.tires.map((t, i) => (
                 <fieldset key={t.id} className="rounded-lg border border-asphalt-200 bg-asphalt-50 p-3" data-testid={`check-${t.position}`}>
                   <legend className="px-1 text-base font-bold">{POSITION_LABELS[t.position]}</legend>
-                  <div className="grid grid-cols-4 gap-2">
+                  <div className="grid grid-cols-4 items-end gap-2">
                     {(["inner", "centre", "outer"] as const).map((g) => (
                       <div key={g}>
-                        <label htmlFor={`${id}-${t.id}-${g}`} className="block text-sm font-semibold capitalize">
-                          {g} <span className="font-normal text-asphalt-600">{depthLabel}</span>
+                        <label htmlFor={`${id}-${t.id}-${g}`} className="block text-sm font-semibold">
+                          {GROOVE_LABEL[g]}
                         </label>
                         <Input
                           id={`${id}-${t.id}-${g}`}
@@ -156,7 +162,7 @@ export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnde
                     ))}
                     <div>
                       <label htmlFor={`${id}-${t.id}-p`} className="block text-sm font-semibold">
-                        Pressure <span className="font-normal text-asphalt-600">{PRESSURE_LABEL[ctx.pressureUnit]}</span>
+                        {PRESSURE_LABEL[ctx.pressureUnit]}
                       </label>
                       <Input
                         id={`${id}-${t.id}-p`}

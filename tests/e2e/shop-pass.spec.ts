@@ -89,3 +89,47 @@ test("the shop owner sees the shop's passes, its profile and its staff", async (
   await expect(page.getByText(demoAccounts.jo.email)).toBeVisible();
   await page.screenshot({ path: `${SCREENS}/shop-profile-desktop.png`, fullPage: true });
 });
+
+test("the owner invites a technician, who joins once through the e-mailed link, and is later removed", async ({ page }) => {
+  const email = `new-tech-${Date.now()}@example.test`;
+  const session = new SessionPages(page);
+  await session.signInAndLand(demoAccounts.wren.email, "/shop");
+  await page.goto("/shop/profile");
+  await page.getByLabel("Invite a technician by e-mail").fill(email);
+  await page.getByRole("button", { name: "Send the invitation" }).click();
+  await expect(page.getByText(`An invitation went to ${email}.`)).toBeVisible();
+  await expect(page.getByText(`${email} · waiting to be accepted`)).toBeVisible();
+
+  await openNewestMail(page, email, "Wren Halloway invited you to Quillby Tread Works on Fourpatch");
+  const link = await page.frameLocator("iframe").getByRole("link", { name: "Join Quillby Tread Works" }).getAttribute("href");
+  expect(link).toMatch(/\/join\//);
+  const path = new URL(link!).pathname;
+  await page.goto("/shop/profile");
+  await session.signOut();
+
+  await page.goto(path);
+  await expect(page.getByText(`The invitation is for ${email}.`)).toBeVisible();
+  await page.goto("/sign-up");
+  await page.getByLabel("Your name").fill("Perrin Dunmore");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill("a-long-enough-password");
+  await page.getByRole("button", { name: "Create my logbook" }).click();
+  await expect(page).toHaveURL(/\/garage$/);
+  await page.goto(path);
+  await page.getByRole("button", { name: "Join Quillby Tread Works" }).click();
+  await expect(page).toHaveURL(/\/shop$/);
+  await expect(page.getByRole("heading", { name: "Passes at Quillby Tread Works" })).toBeVisible();
+  await page.goto(path);
+  await expect(page.getByText("This invitation was already used")).toBeVisible();
+  await page.goto("/shop");
+  await session.signOut();
+
+  await session.signInAndLand(demoAccounts.wren.email, "/shop");
+  await page.goto("/shop/profile");
+  await page.getByRole("button", { name: "Remove Perrin" }).click();
+  await expect(page.getByText("Perrin Dunmore is no longer on the staff.")).toBeVisible();
+  await session.signOut();
+  await session.signIn(email, "a-long-enough-password");
+  await page.goto("/shop");
+  await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
+});

@@ -196,7 +196,9 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-4 gap-y-1 px-4 py-3">
           <TimeLeft endsAt={access.endsAt.toISOString()} serverNow={now.toISOString()} refreshOnEnd={false} className="text-lg" />
           <span className="text-asphalt-700">
-            {v.nickname} · {SCOPE_LABEL[access.scope]} · {access.shopName}
+            <span className="hidden sm:inline">{v.nickname} · </span>
+            {SCOPE_LABEL[access.scope]}
+            <span className="hidden md:inline"> · {access.shopName}</span>
           </span>
         </div>
       </div>
