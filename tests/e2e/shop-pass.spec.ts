@@ -129,7 +129,8 @@ test("the owner invites a technician, who joins once through the e-mailed link, 
   await page.getByRole("button", { name: "Remove Perrin" }).click();
   await expect(page.getByText("Perrin Dunmore is no longer on the staff.")).toBeVisible();
   await session.signOut();
-  await session.signIn(email, "a-long-enough-password");
+  // No shop any more: the account lands in its own garage, and the workspace is closed to it.
+  await session.signInAndLand(email, "/garage", "a-long-enough-password");
   await page.goto("/shop");
   await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
 });
