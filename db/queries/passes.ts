@@ -453,8 +453,29 @@ export async function sendDuePassEndedNotices({ now }: { now: Date }) {
   return { due: due.length, sent };
 }
 
-/** Tells the driver that the shop added to a vehicle's logbook. */
-export async function notifyShopEntry({ access, vehicleId, summary }: { access: LogbookAccess & { kind: "pass" }; vehicleId: string; summary: string }) {
+/** Writes under a pass closer together than this make one visit: one e-mail, not one per entry. */
+export const ENTRY_NOTICE_WINDOW_MS = 2 * 60 * 60 * 1000;
+const WRITE_ACTIONS = ["add_service", "add_check", "add_set"];
+
+/**
+ * Tells the driver that the shop added to a vehicle's logbook: once per
+ * visit (the first write of the pass in ENTRY_NOTICE_WINDOW_MS), so a busy
+ * bay does not fill the driver's inbox; the "pass ended" e-mail counts them all.
+ */
+export async function notifyShopEntry({ access, vehicleId, summary, now = new Date() }: { access: LogbookAccess & { kind: "pass" }; vehicleId: string; summary: string; now?: Date }) {
+  const [recent] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(accessLog)
+    .where(
+      and(
+        eq(accessLog.passId, access.passId),
+        eq(accessLog.vehicleId, vehicleId),
+        inArray(accessLog.action, WRITE_ACTIONS),
+        gt(accessLog.at, new Date(now.getTime() - ENTRY_NOTICE_WINDOW_MS)),
+      ),
+    );
+  // The write being reported is one of them; any other means the driver was already told.
+  if ((recent?.n ?? 0) > 1) return false;
   const [row] = await db
     .select({ nickname: vehicle.nickname, driverName: user.name, driverEmail: user.email })
     .from(vehicle)
@@ -474,4 +495,5 @@ export async function notifyShopEntry({ access, vehicleId, summary }: { access: 
       logbookUrl: `${appUrl()}/garage/vehicles/${vehicleId}`,
     }),
   });
+  return true;
 }

@@ -9,6 +9,8 @@ import { POST as invite } from "@/app/api/shops/[shopId]/invitations/route";
 import { POST as join } from "@/app/api/shops/join/[invitationId]/route";
 import { POST as addService } from "@/app/api/passes/[passId]/vehicles/[vehicleId]/service/route";
 import { POST as issue } from "@/app/api/passes/route";
+import { POST as addCheck } from "@/app/api/passes/[passId]/vehicles/[vehicleId]/checks/route";
+import { POST as revoke } from "@/app/api/passes/[passId]/revoke/route";
 import { getInvitation } from "@/db/queries/shops";
 import { listShopPasses } from "@/db/queries/passes";
 import { seedPasses } from "@/db/seed/passes";
@@ -121,6 +123,17 @@ describe("e-mails to the driver", () => {
     expect(mail.text).toContain("Rafe Cullis at Brackenfold Tyres added to the logbook of Juno's little Korvan: rotation with a tread check of 4 tires.");
     expect(mail.text).toContain("qualified tire technician decide");
     expect(mail.tags).toEqual([{ name: "kind", value: "shop-entry" }]);
+
+    // A second entry in the same visit sends no second e-mail; the pass-ended notice counts both.
+    const check = await addCheck(
+      request(`/api/passes/${pass.id}/vehicles/${car.vehicle.id}/checks`, { as: tech, body: { setId: car.set.id, readings: [{ tireId: car.tires[0].id, centre: "5.9" }] } }),
+      ctx({ passId: pass.id, vehicleId: car.vehicle.id }),
+    );
+    expect(check.status).toBe(201);
+    expect((await mailsTo(driver.email)).filter((m) => m.subject.startsWith("Brackenfold Tyres added"))).toHaveLength(1);
+    await revoke(request(`/api/passes/${pass.id}/revoke`, { as: driver, body: {} }), ctx({ passId: pass.id }));
+    const [ended] = (await mailsTo(driver.email)).filter((m) => m.subject === "Brackenfold Tyres can no longer open your logbook");
+    expect(ended.text).toContain("The shop added 2 entries under this pass; they stay in your logbook.");
   });
 });
 
