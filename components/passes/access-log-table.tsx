@@ -4,7 +4,9 @@ const ACTION_LABEL: Record<string, string> = {
   add_service: "Recorded work",
   add_check: "Recorded a tread check",
   add_set: "Logged a fitted set",
+  read_set: "Opened a set",
   download: "Opened a file",
+  upload: "Added a file",
 };
 
 export function actionLabel(action: string) {

@@ -362,7 +362,7 @@ export async function listPassableVehicles({ session }: { session: Session | nul
  */
 export async function listAccessLog({ access, vehicleId, limit = 200 }: { access: LogbookAccess; vehicleId?: string; limit?: number }) {
   if (access.kind !== "owner") throw forbidden("The access log is the driver's to read.");
-  if (vehicleId) await assertVehicleAccess(access, { vehicleId, action: "read access log" });
+  if (vehicleId) await assertVehicleAccess(access, { vehicleId, action: "read_access_log" });
   return db
     .select({
       id: accessLog.id,

@@ -51,8 +51,14 @@ test("a driver shares a logbook with a shop, the technician adds to it, and the 
   // The new reading is the tire's depth now (the minimum of its grooves).
   await expect(shop.tire("front_left")).toContainText("4.1 mm");
   await tech.screenshot({ path: `${SCREENS}/technician-logbook-tablet.png`, fullPage: true });
+  await tech.screenshot({ path: `${SCREENS}/technician-logbook-tablet-viewport.png` });
   await tech.setViewportSize({ width: 390, height: 844 });
   await tech.screenshot({ path: `${SCREENS}/technician-logbook-phone.png`, fullPage: true });
+  await tech.getByRole("heading", { name: "Record work" }).scrollIntoViewIfNeeded();
+  await tech.screenshot({ path: `${SCREENS}/technician-record-work-phone-viewport.png` });
+  await tech.goto("/shop");
+  await tech.screenshot({ path: `${SCREENS}/technician-passes-phone.png`, fullPage: true });
+  await tech.goBack();
 
   // --- The driver sees the work, the access log and the e-mail.
   await driver.goto(`/garage/vehicles/${vehicleId}`);
