@@ -2,6 +2,7 @@
 // conditions and reminders stay interesting whenever the demo is loaded.
 import { seedAccounts, type DemoIds } from "./seed/accounts";
 import { seedLogbook } from "./seed/logbook";
+import { seedPasses } from "./seed/passes";
 import { seedReminders } from "./seed/reminders";
 
 export type SeedContext = { ids: DemoIds; today: string };
@@ -9,6 +10,8 @@ export type SeedContext = { ids: DemoIds; today: string };
 /** Each area of the product adds its part of the scenario here, in order. */
 const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [
   { name: "logbook", run: seedLogbook },
+  // After the logbook part: it gives the shop passes to Ada's vehicles.
+  { name: "passes", run: async (ctx) => void (await seedPasses(ctx)) },
   // Last: it only sets the drivers' reminder settings.
   { name: "reminders", run: seedReminders },
 ];

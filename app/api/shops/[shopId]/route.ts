@@ -1,0 +1,16 @@
+// A shop's profile and staff: its owner's to read and edit.
+import { getShopForOwner, updateShopProfile } from "@/db/queries/shops";
+import { parseJson, route } from "@/lib/api/handler";
+import { shopProfileSchema } from "@/lib/validation/shops";
+
+export const dynamic = "force-dynamic";
+
+export const GET = route<{ shopId: string }>(async ({ session, params }) => {
+  const { profile, staff, invitations } = await getShopForOwner({ session, shopId: params.shopId, now: new Date() });
+  return { profile, staff, invitations };
+});
+
+export const PATCH = route<{ shopId: string }>(async ({ req, session, params }) => {
+  const input = await parseJson(req, shopProfileSchema);
+  return { shop: await updateShopProfile({ session, shopId: params.shopId, input }) };
+});

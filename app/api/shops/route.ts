@@ -1,0 +1,16 @@
+// The shop directory (any signed-in account) and opening a new shop.
+import { createShop, searchShops } from "@/db/queries/shops";
+import { created, parseJson, route } from "@/lib/api/handler";
+import { createShopSchema, directoryQuerySchema } from "@/lib/validation/shops";
+
+export const dynamic = "force-dynamic";
+
+export const GET = route(async ({ req }) => {
+  const { q } = directoryQuerySchema.parse({ q: new URL(req.url).searchParams.get("q") ?? "" });
+  return { shops: await searchShops({ q }) };
+});
+
+export const POST = route(async ({ req, session }) => {
+  const input = await parseJson(req, createShopSchema);
+  return created({ shop: await createShop({ session, input }) });
+});
