@@ -60,9 +60,9 @@ describe("reminder settings", () => {
     const { text, events } = await feedEvents(token);
     const kinds = events.map((e) => String(e.getFirstPropertyValue("uid")).split("/")[2].replace("@fourpatch", "")).sort();
     expect(kinds).toEqual(["age-replace", "age-replace", "seasonal-swap"]);
-    // The stored winter set goes on on the chosen autumn date.
+    // The winter set is still stored in March, after the chosen autumn date: overdue since 1 October.
     const swap = events.find((e) => String(e.getFirstPropertyValue("uid")).includes("seasonal-swap"))!;
-    expect((swap.getFirstPropertyValue("dtstart") as ICAL.Time).toString()).toBe("2026-10-01");
+    expect((swap.getFirstPropertyValue("dtstart") as ICAL.Time).toString()).toBe("2025-10-01");
     // One alarm, 30 days before (RFC 5545 §3.8.6.3).
     for (const e of events) {
       expect(e.getAllSubcomponents("valarm").map((a) => (a.getFirstPropertyValue("trigger") as ICAL.Duration).toSeconds())).toEqual([-30 * 86_400]);
