@@ -17,7 +17,7 @@ import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
 import { depthUnitFor, formatDistance } from "@/lib/units";
 import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
-import { formatBytes, formatDate, formatMoney, setTitle } from "./format";
+import { formatBytes, formatDate, formatMoney, linkClass, setTitle } from "./format";
 import { HistoryTable, historyRows } from "./history-table";
 import { TireList } from "./tire-list";
 
@@ -55,7 +55,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
         </h2>
         {book.sets.length === 0 ? (
           <Card>
-            <p>No sets yet. <Link href={`/garage/log-purchase?vehicle=${id}`}>Log the tires on this vehicle</Link>.</p>
+            <p>No sets yet. <Link href={`/garage/log-purchase?vehicle=${id}`} className={linkClass}>Log the tires on this vehicle</Link>.</p>
           </Card>
         ) : null}
         {book.sets.map((s) => (
@@ -84,7 +84,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
             Who looked at this logbook
           </h2>
           {book.accessLog.length === 0 ? (
-            <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/garage/passes">Shop passes</Link>.</p>
+            <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/garage/passes" className={linkClass}>Shop passes</Link>.</p>
           ) : (
             <div className="overflow-x-auto rounded border border-asphalt-200">
               <table className="w-full min-w-[32rem] text-left text-sm">
@@ -134,7 +134,7 @@ function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; 
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h3 className="text-lg font-bold">
-            <Link href={`/garage/sets/${set.id}`}>{setTitle(set)}</Link>
+            <Link href={`/garage/sets/${set.id}`} className={linkClass}>{setTitle(set)}</Link>
           </h3>
           <p className="text-sm text-asphalt-600">
             {SET_KIND_LABELS[set.kind]} · {set.size} · {state}

@@ -57,6 +57,13 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
     const projection = last && end && end.x > last.x ? [last, end] : [];
     return { tire: t, points, projection, look: LOOK[i % LOOK.length], name: POSITION_LABELS[t.position] };
   });
+  // The axis runs to the first tire's projected limit plus a margin, so a far-off projection of a
+  // slow-wearing tire cannot squeeze the measured readings into a corner; longer lines are clipped.
+  const lastX = Math.max(...lines.flatMap((l) => l.points.map((p) => p.x)));
+  const firstX = Math.min(...lines.flatMap((l) => l.points.map((p) => p.x)));
+  const ends = lines.flatMap((l) => (l.projection[1] ? [l.projection[1].x] : []));
+  const span = Math.max(lastX - firstX, axis === "date" ? 90 * 86_400_000 : 3_000);
+  const xMax = ends.length ? Math.max(lastX, Math.min(Math.max(...ends), Math.min(...ends) + span * 0.5)) : lastX;
   const unitLabel = depthUnit === "32nds" ? "32nds in" : "mm";
   const xFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
 
@@ -84,7 +91,7 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
         <ResponsiveContainer width="100%" height="100%">
           <LineChart margin={{ top: 10, right: 16, bottom: 8, left: 0 }}>
             <CartesianGrid strokeDasharray="3 3" stroke="#d5d9df" />
-            <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} scale={axis === "date" ? "time" : "linear"} tickFormatter={xFormat} tick={{ fontSize: 12 }} allowDuplicatedCategory={false} />
+            <XAxis dataKey="x" type="number" domain={[firstX, xMax]} allowDataOverflow scale={axis === "date" ? "time" : "linear"} tickFormatter={xFormat} tick={{ fontSize: 12 }} allowDuplicatedCategory={false} />
             <YAxis dataKey="y" type="number" domain={[0, "auto"]} tick={{ fontSize: 12 }} width={40} unit={depthUnit === "mm" ? "" : ""} />
             <Tooltip labelFormatter={(v) => xFormat(Number(v))} formatter={(v, n) => [`${v} ${unitLabel}`, n]} />
             <Legend />
