@@ -104,7 +104,7 @@ test.describe("a household driver logs a new tire purchase", () => {
         where: "Garage loft",
         screen: "phone",
       });
-      await expect(page.getByText("Stored at Garage loft")).toBeVisible();
+      await expect(logbook.setCard("All-season tires")).toContainText("Stored at Garage loft");
       // Nothing on the page is wider than the phone.
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
       expect(overflow).toBeLessThanOrEqual(0);
