@@ -16,6 +16,7 @@ import { depthUnitFor, formatDepth, formatDistance, formatPressure } from "@/lib
 import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/logbook";
 import { api, keys } from "./api";
 import { formatDate, formatMoney, linkClass, setTitle } from "./format";
+import { SetSettings } from "./set-settings";
 import { TireList } from "./tire-list";
 import { WearChart } from "./wear-chart";
 
@@ -78,6 +79,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
             </ul>
           ) : null}
           <SafetyNote compact />
+          <SetSettings set={s} vehicleId={d.vehicle.id} />
         </Card>
       </div>
 

@@ -21,9 +21,23 @@ import { formatBytes, formatDate, formatMoney, linkClass, setTitle } from "./for
 import { HistoryTable, historyRows } from "./history-table";
 import { TireList } from "./tire-list";
 
-export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook; saved?: string }) {
+/**
+ * `queryUrl` and `canManage` let a shop's page show the same logbook under a
+ * pass: read from its own route, without the owner's purchase and swap actions.
+ */
+export function VehicleLogbookView({
+  initial,
+  saved,
+  queryUrl,
+  canManage = true,
+}: {
+  initial: VehicleLogbook;
+  saved?: string;
+  queryUrl?: string;
+  canManage?: boolean;
+}) {
   const id = initial.vehicle.id;
-  const { data } = useQuery({ queryKey: keys.vehicle(id), queryFn: () => api<VehicleLogbook>(`/api/vehicles/${id}`), initialData: initial });
+  const { data } = useQuery({ queryKey: keys.vehicle(id), queryFn: () => api<VehicleLogbook>(queryUrl ?? `/api/vehicles/${id}`), initialData: initial });
   const book = data ?? initial;
   const v = book.vehicle;
   const depthUnit = depthUnitFor(book.viewer.units);
@@ -36,6 +50,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
         title={v.nickname}
         description={`${v.make} ${v.model}${v.year ? ` · ${v.year}` : ""}${v.plate ? ` · ${v.plate}` : ""}${book.lastOdometer ? ` · ${formatDistance(book.lastOdometer.odometerKm, distanceUnit)} on ${formatDate(book.lastOdometer.date)}` : ""}`}
         actions={
+          canManage ? (
           <>
             <Link href={`/garage/vehicles/${id}/check`} className={buttonVariants()}>
               Record a tread check
@@ -44,6 +59,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
               Log a purchase
             </Link>
           </>
+          ) : null
         }
       />
       {saved === "set" ? <Alert tone="success" className="mb-4">The new set is saved in the logbook.</Alert> : null}
@@ -59,7 +75,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
           </Card>
         ) : null}
         {book.sets.map((s) => (
-          <SetCard key={s.id} set={s} vehicleId={id} mounted={mounted} depthUnit={depthUnit} files={book.attachments.filter((a) => a.setId === s.id)} />
+          <SetCard key={s.id} set={s} vehicleId={id} mounted={mounted} depthUnit={depthUnit} files={book.attachments.filter((a) => a.setId === s.id)} canManage={canManage} />
         ))}
         <SafetyNote compact />
       </section>
@@ -78,7 +94,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
         {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} />}
       </section>
 
-      {book.accessLog !== undefined ? (
+      {canManage ? (
         <section aria-labelledby="log-h" className="mb-8 space-y-3">
           <h2 id="log-h" className="text-xl font-bold">
             Who looked at this logbook
@@ -126,7 +142,21 @@ const ACTION_LABEL: Record<string, string> = {
   download: "Opened a file",
 };
 
-function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; vehicleId: string; mounted: SetView | null; depthUnit: "mm" | "32nds"; files: VehicleLogbook["attachments"] }) {
+function SetCard({
+  set,
+  vehicleId,
+  mounted,
+  depthUnit,
+  files,
+  canManage,
+}: {
+  set: SetView;
+  vehicleId: string;
+  mounted: SetView | null;
+  depthUnit: "mm" | "32nds";
+  files: VehicleLogbook["attachments"];
+  canManage: boolean;
+}) {
   const state =
     set.state === "mounted" ? "On the car" : set.state === "stored" ? `Stored${set.storageLocation ? ` at ${set.storageLocation}` : ""}` : "Retired";
   return (
@@ -134,7 +164,13 @@ function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; 
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h3 className="text-lg font-bold">
-            <Link href={`/garage/sets/${set.id}`} className={linkClass}>{setTitle(set)}</Link>
+            {canManage ? (
+              <Link href={`/garage/sets/${set.id}`} className={linkClass}>
+                {setTitle(set)}
+              </Link>
+            ) : (
+              setTitle(set)
+            )}
           </h3>
           <p className="text-sm text-asphalt-600">
             {SET_KIND_LABELS[set.kind]} · {set.size} · {state}
@@ -155,10 +191,12 @@ function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; 
       ) : null}
       {files.length ? <FileList files={files} /> : null}
       <div className="flex flex-wrap gap-2">
-        <Link href={`/garage/sets/${set.id}`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
-          Wear chart and details
-        </Link>
-        {set.state === "stored" ? <SwapControl set={set} vehicleId={vehicleId} mounted={mounted} /> : null}
+        {canManage ? (
+          <Link href={`/garage/sets/${set.id}`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
+            Wear chart and details
+          </Link>
+        ) : null}
+        {canManage && set.state === "stored" ? <SwapControl set={set} vehicleId={vehicleId} mounted={mounted} /> : null}
       </div>
     </Card>
   );
