@@ -19,6 +19,7 @@ import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
 import { formatBytes, formatDate, formatMoney, linkClass, setTitle } from "./format";
 import { HistoryTable, historyRows } from "./history-table";
+import { ServiceEntryForm } from "./service-entry-form";
 import { TireList } from "./tire-list";
 
 /**
@@ -84,6 +85,9 @@ export function VehicleLogbookView({
         <h2 id="history-h" className="text-xl font-bold">
           History
         </h2>
+        {canManage ? (
+          <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
+        ) : null}
         <HistoryTable rows={historyRows(book, depthUnit)} distanceUnit={distanceUnit} />
       </section>
 
