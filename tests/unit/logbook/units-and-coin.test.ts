@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { coinDepth, COIN_RESULTS, depthCondition, thirtySecondsToMm } from "@/lib/tires";
+import { coinDepth, coinLabel, COIN_RESULTS, depthCondition, thirtySecondsToMm } from "@/lib/tires";
 import {
   depthToMm,
   distanceToKm,
@@ -68,5 +68,7 @@ describe("the coin method [practice, trade-facts §2]", () => {
   it("refuses what is not a coin result", () => {
     expect(coinDepth("constructor" as never)).toMatchObject({ ok: false, code: "bad-coin" });
     expect(COIN_RESULTS).toHaveLength(3);
+    // Each choice the form offers says which coin and what it means.
+    expect(COIN_RESULTS.map(coinLabel)).toEqual([expect.stringMatching(/quarter.*4\/32/), expect.stringMatching(/2\/32–4\/32/), expect.stringMatching(/cent.*under 2\/32/)]);
   });
 });
