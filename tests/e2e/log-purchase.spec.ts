@@ -19,7 +19,7 @@ const RECEIPT = Buffer.from(
   "%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\n2 0 obj<</Type/Pages/Kids[3 0 R]/Count 1>>endobj\n3 0 obj<</Type/Page/Parent 2 0 R/MediaBox[0 0 200 200]>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n",
 );
 
-async function logPurchase(page: Page, who: "tomas" | "ada", opts: { vehicle: RegExp; kind: "Winter" | "All-season"; size: string; load: string; fate: "stored" | "retired"; where?: string; screen: string }) {
+async function logPurchase(page: Page, who: "tomas" | "ada", opts: { vehicle: RegExp; kind: "Winter" | "All-season"; size: string; load: string; fate: "stored" | "retired"; where?: string; screen: string; share?: boolean }) {
   const session = new SessionPages(page);
   const logbook = new LogbookPages(page);
   await session.signInAndLand(demoAccounts[who].email, "/garage");
@@ -39,7 +39,16 @@ async function logPurchase(page: Page, who: "tomas" | "ada", opts: { vehicle: Re
     "Rear left": dateCode(150),
     "Rear right": dateCode(270),
   };
-  for (const p of POSITIONS) await logbook.dotInput(p).fill(`DOT 5TRW 9KLM ${codes[p].code}`);
+  if (opts.share) {
+    // The shortcut: one code typed once fills all four, then one tire is corrected by hand.
+    await page.getByLabel("All tires share this code").check();
+    await logbook.dotInput("Front left").fill(`DOT 5TRW 9KLM ${codes["Front left"].code}`);
+    for (const p of POSITIONS) await expect(logbook.dotInput(p)).toHaveValue(`DOT 5TRW 9KLM ${codes["Front left"].code}`);
+    await page.getByLabel("All tires share this code").uncheck();
+    await logbook.dotInput("Rear right").fill(`DOT 5TRW 9KLM ${codes["Rear right"].code}`);
+  } else {
+    for (const p of POSITIONS) await logbook.dotInput(p).fill(`DOT 5TRW 9KLM ${codes[p].code}`);
+  }
   for (const p of POSITIONS) {
     await expect(logbook.dotDecoded(p)).toContainText(`Made in week ${codes[p].week} of ${codes[p].year}`);
     await expect(logbook.dotDecoded(p)).toContainText("months old");
@@ -123,6 +132,7 @@ test.describe("a household driver logs a new tire purchase", () => {
         load: "850 kg (102)",
         fate: "retired",
         screen: "desktop",
+        share: true,
       });
       await expect(page.getByText(/Retired/).first()).toBeVisible();
       await checkAndSeeChart(page, logbook, "desktop");
