@@ -92,7 +92,7 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
       </div>
       <div className="h-72 w-full sm:h-96" data-testid="wear-chart">
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart margin={{ top: 10, right: 16, bottom: 8, left: 0 }}>
+          <LineChart margin={{ top: 10, right: 36, bottom: 8, left: 0 }}>
             <CartesianGrid strokeDasharray="3 3" stroke="#d5d9df" />
             <XAxis dataKey="x" type="number" domain={[firstX, xMax]} allowDataOverflow ticks={ticks} interval={0} tickFormatter={tickFormat} tick={{ fontSize: 12 }} allowDuplicatedCategory={false} />
             <YAxis dataKey="y" type="number" domain={[0, "auto"]} tick={{ fontSize: 12 }} width={40} unit={depthUnit === "mm" ? "" : ""} />
