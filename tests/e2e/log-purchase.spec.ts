@@ -149,3 +149,32 @@ test("the demo's set page shows the wear chart with the limit line and the inner
   expect(await new LogbookPages(page).chartMarkers().count()).toBeGreaterThan(20);
   await page.screenshot({ path: `${SCREENS}/desktop-demo-set.png`, fullPage: true });
 });
+
+test("a new driver adds the vehicle inside the purchase flow; a wrong field keeps everything typed", async ({ page }) => {
+  await page.goto("/sign-up");
+  await page.getByLabel("Your name").fill("Bram Oakhollow");
+  await page.getByLabel("E-mail").fill(`bram-${Date.now()}@example.test`);
+  await page.getByLabel("Password").fill("a-long-enough-password");
+  await page.getByRole("button", { name: "Create my logbook" }).click();
+  await expect(page).toHaveURL(/\/garage$/);
+  const logbook = new LogbookPages(page);
+  await logbook.openPurchase();
+  // With no vehicle yet, the form asks for one in place.
+  await page.getByLabel("Name for the vehicle").fill("Bram's hatch");
+  await page.getByLabel("Make").fill("Velora");
+  await page.getByLabel("Model").fill("Pip");
+  await page.getByLabel("Placard tire size").fill("185/65 R15 88T");
+  await logbook.typeSize("185/65 R15 88T");
+  await expect(logbook.sizeDecoded()).toContainText("Fits");
+  const { code } = dateCode(60);
+  for (const p of POSITIONS) await logbook.dotInput(p).fill(`DOT 5TRW 9KLM ${code}`);
+  await page.getByLabel("Date of purchase").fill("2099-01-01");
+  await page.getByRole("button", { name: "Save the purchase" }).click();
+  await expect(page.getByText("The purchase date is in the future.")).toBeVisible();
+  await expect(page.getByLabel("Model")).toHaveValue("Pip");
+  await expect(logbook.dotInput("Rear right")).toHaveValue(`DOT 5TRW 9KLM ${code}`);
+  await page.getByLabel("Date of purchase").fill(today());
+  await logbook.savePurchase();
+  await expect(page.getByRole("heading", { name: "Bram's hatch" })).toBeVisible();
+  await expect(logbook.setCard(/Summer set/).getByTestId("tire")).toHaveCount(4);
+});

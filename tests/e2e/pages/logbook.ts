@@ -23,7 +23,7 @@ export class LogbookPages {
   }
 
   async typeSize(size: string) {
-    await this.page.getByLabel("Tire size").fill(size);
+    await this.page.getByLabel("Tire size", { exact: true }).fill(size);
   }
 
   sizeDecoded() {
