@@ -39,7 +39,7 @@ export async function storeFile(bytes: Uint8Array, ext: string): Promise<string>
   const dir = uploadsDir();
   await fs.mkdir(dir, { recursive: true });
   const storedName = `${crypto.randomBytes(18).toString("base64url")}.${ext}`;
-  await fs.writeFile(path.join(dir, storedName), bytes, { flag: "wx" });
+  await fs.writeFile(path.join(/*turbopackIgnore: true*/ dir, storedName), bytes, { flag: "wx" });
   return storedName;
 }
 
@@ -48,12 +48,12 @@ const SAFE_NAME = /^[A-Za-z0-9_-]{24}\.[a-z0-9]{2,5}$/;
 
 export async function readStoredFile(storedName: string): Promise<Buffer> {
   if (!SAFE_NAME.test(storedName)) throw new AppError("not_found", "That file was not found.");
-  return fs.readFile(path.join(uploadsDir(), storedName));
+  return fs.readFile(path.join(/*turbopackIgnore: true*/ uploadsDir(), storedName));
 }
 
 export async function removeStoredFile(storedName: string): Promise<void> {
   if (!SAFE_NAME.test(storedName)) return;
-  await fs.rm(path.join(uploadsDir(), storedName), { force: true });
+  await fs.rm(path.join(/*turbopackIgnore: true*/ uploadsDir(), storedName), { force: true });
 }
 
 /** A file name safe to echo back in a Content-Disposition header. */

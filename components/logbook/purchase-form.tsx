@@ -62,6 +62,7 @@ type Values = {
   tires: TireRow[];
   odometer: string;
   odometerUnit: "km" | "mi";
+  confirmLowerOdometer: boolean;
   mountNow: "yes" | "no";
   storageLocation: string;
   replacedFate: "" | "stored" | "retired";
@@ -110,6 +111,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
       tires: FOUR.map((position) => ({ position, dotCode: "", newDepth: depthUnit === "mm" ? "8" : "10" })),
       odometer: "",
       odometerUnit: distanceUnitFor(units),
+      confirmLowerOdometer: false,
       mountNow: "yes",
       storageLocation: "",
       replacedFate: "",
@@ -431,6 +433,12 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
         <Field label={`Odometer at fitting (${w.odometerUnit ?? "km"})`} hint="Optional; it lets Fourpatch project the wear." error={err("odometer")}>
           {({ id, describedBy, invalid }) => <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} {...register("odometer")} />}
         </Field>
+        {err("odometer") ? (
+          <label className="flex min-h-11 items-center gap-2 rounded border border-condition-watch/40 bg-condition-watch-bg p-2 text-sm">
+            <input type="checkbox" className="size-5" {...register("confirmLowerOdometer")} />
+            The lower reading is right (the odometer was replaced, or the earlier reading was wrong).
+          </label>
+        ) : null}
       </Card>
 
       <Card className="space-y-3">

@@ -3,6 +3,8 @@
 // chart, the readings table and the set's own limits.
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
 import { Alert } from "@/components/ui/alert";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { Card, CardTitle } from "@/components/ui/card";
@@ -13,7 +15,8 @@ import type { SetDetail } from "@/db/queries/logbook";
 import { depthUnitFor, formatDepth, formatDistance, formatPressure } from "@/lib/units";
 import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/logbook";
 import { api, keys } from "./api";
-import { formatDate, formatMoney, setTitle } from "./format";
+import { formatDate, formatMoney, linkClass, setTitle } from "./format";
+import { SetSettings } from "./set-settings";
 import { TireList } from "./tire-list";
 import { WearChart } from "./wear-chart";
 
@@ -25,6 +28,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
   const distanceUnit = d.vehicle.odometerUnit;
   const state = s.state === "mounted" ? "on the car" : s.state === "stored" ? `stored${s.storageLocation ? ` at ${s.storageLocation}` : ""}` : "retired";
   const positionOf = new Map(s.tires.map((t) => [t.id, POSITION_LABELS[t.position]]));
+  const [showAll, setShowAll] = useState(false);
 
   return (
     <>
@@ -32,7 +36,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         title={setTitle(s)}
         description={
           <>
-            <Link href={`/garage/vehicles/${d.vehicle.id}`}>{d.vehicle.nickname}</Link> · {SET_KIND_LABELS[s.kind]} · {s.size} · {state}
+            <Link href={`/garage/vehicles/${d.vehicle.id}`} className={linkClass}>{d.vehicle.nickname}</Link> · {SET_KIND_LABELS[s.kind]} · {s.size} · {state}
           </>
         }
         actions={
@@ -75,6 +79,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
             </ul>
           ) : null}
           <SafetyNote compact />
+          <SetSettings set={s} vehicleId={d.vehicle.id} />
         </Card>
       </div>
 
@@ -117,7 +122,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
                 </tr>
               </thead>
               <tbody>
-                {d.checks.flatMap((c) =>
+                {(showAll ? d.checks : d.checks.slice(0, 3)).flatMap((c) =>
                   c.readings.map((r) => (
                     <tr key={`${c.id}-${r.tireId}`} className="border-t border-asphalt-200">
                       <td className="px-3 py-2 whitespace-nowrap">{formatDate(c.checkedOn)}</td>
@@ -137,6 +142,11 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
             </table>
           </div>
         )}
+        {d.checks.length > 3 ? (
+          <Button type="button" variant="secondary" size="sm" onClick={() => setShowAll((x) => !x)} aria-expanded={showAll}>
+            {showAll ? "Show the latest three checks" : `Show all ${d.checks.length} checks`}
+          </Button>
+        ) : null}
       </section>
     </>
   );

@@ -49,7 +49,7 @@ export function TireList({ tires, depthUnit, showPattern = false }: { tires: Tir
             ) : null}
             {showPattern && t.projection ? (
               <>
-                <dt className="text-asphalt-600">Limit</dt>
+                <dt className="text-asphalt-600">At limit</dt>
                 <dd>
                   {t.projection.projectedDate ? `reached around ${formatDate(t.projection.projectedDate)}` : "no date yet"}
                   {t.projection.method === "typical-rate" ? " (estimated from a typical wear rate)" : ` (confidence: ${t.projection.confidence})`}

@@ -17,13 +17,28 @@ import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
 import { depthUnitFor, formatDistance } from "@/lib/units";
 import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
-import { formatBytes, formatDate, formatMoney, setTitle } from "./format";
+import { formatBytes, formatDate, formatMoney, linkClass, setTitle } from "./format";
 import { HistoryTable, historyRows } from "./history-table";
+import { ServiceEntryForm } from "./service-entry-form";
 import { TireList } from "./tire-list";
 
-export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook; saved?: string }) {
+/**
+ * `queryUrl` and `canManage` let a shop's page show the same logbook under a
+ * pass: read from its own route, without the owner's purchase and swap actions.
+ */
+export function VehicleLogbookView({
+  initial,
+  saved,
+  queryUrl,
+  canManage = true,
+}: {
+  initial: VehicleLogbook;
+  saved?: string;
+  queryUrl?: string;
+  canManage?: boolean;
+}) {
   const id = initial.vehicle.id;
-  const { data } = useQuery({ queryKey: keys.vehicle(id), queryFn: () => api<VehicleLogbook>(`/api/vehicles/${id}`), initialData: initial });
+  const { data } = useQuery({ queryKey: keys.vehicle(id), queryFn: () => api<VehicleLogbook>(queryUrl ?? `/api/vehicles/${id}`), initialData: initial });
   const book = data ?? initial;
   const v = book.vehicle;
   const depthUnit = depthUnitFor(book.viewer.units);
@@ -36,6 +51,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
         title={v.nickname}
         description={`${v.make} ${v.model}${v.year ? ` · ${v.year}` : ""}${v.plate ? ` · ${v.plate}` : ""}${book.lastOdometer ? ` · ${formatDistance(book.lastOdometer.odometerKm, distanceUnit)} on ${formatDate(book.lastOdometer.date)}` : ""}`}
         actions={
+          canManage ? (
           <>
             <Link href={`/garage/vehicles/${id}/check`} className={buttonVariants()}>
               Record a tread check
@@ -44,6 +60,7 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
               Log a purchase
             </Link>
           </>
+          ) : null
         }
       />
       {saved === "set" ? <Alert tone="success" className="mb-4">The new set is saved in the logbook.</Alert> : null}
@@ -55,11 +72,11 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
         </h2>
         {book.sets.length === 0 ? (
           <Card>
-            <p>No sets yet. <Link href={`/garage/log-purchase?vehicle=${id}`}>Log the tires on this vehicle</Link>.</p>
+            <p>No sets yet. <Link href={`/garage/log-purchase?vehicle=${id}`} className={linkClass}>Log the tires on this vehicle</Link>.</p>
           </Card>
         ) : null}
         {book.sets.map((s) => (
-          <SetCard key={s.id} set={s} vehicleId={id} mounted={mounted} depthUnit={depthUnit} files={book.attachments.filter((a) => a.setId === s.id)} />
+          <SetCard key={s.id} set={s} vehicleId={id} mounted={mounted} depthUnit={depthUnit} files={book.attachments.filter((a) => a.setId === s.id)} canManage={canManage} />
         ))}
         <SafetyNote compact />
       </section>
@@ -68,6 +85,9 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
         <h2 id="history-h" className="text-xl font-bold">
           History
         </h2>
+        {canManage ? (
+          <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
+        ) : null}
         <HistoryTable rows={historyRows(book, depthUnit)} distanceUnit={distanceUnit} />
       </section>
 
@@ -78,13 +98,13 @@ export function VehicleLogbookView({ initial, saved }: { initial: VehicleLogbook
         {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} />}
       </section>
 
-      {book.accessLog !== undefined ? (
+      {canManage ? (
         <section aria-labelledby="log-h" className="mb-8 space-y-3">
           <h2 id="log-h" className="text-xl font-bold">
             Who looked at this logbook
           </h2>
           {book.accessLog.length === 0 ? (
-            <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/garage/passes">Shop passes</Link>.</p>
+            <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/garage/passes" className={linkClass}>Shop passes</Link>.</p>
           ) : (
             <div className="overflow-x-auto rounded border border-asphalt-200">
               <table className="w-full min-w-[32rem] text-left text-sm">
@@ -126,7 +146,21 @@ const ACTION_LABEL: Record<string, string> = {
   download: "Opened a file",
 };
 
-function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; vehicleId: string; mounted: SetView | null; depthUnit: "mm" | "32nds"; files: VehicleLogbook["attachments"] }) {
+function SetCard({
+  set,
+  vehicleId,
+  mounted,
+  depthUnit,
+  files,
+  canManage,
+}: {
+  set: SetView;
+  vehicleId: string;
+  mounted: SetView | null;
+  depthUnit: "mm" | "32nds";
+  files: VehicleLogbook["attachments"];
+  canManage: boolean;
+}) {
   const state =
     set.state === "mounted" ? "On the car" : set.state === "stored" ? `Stored${set.storageLocation ? ` at ${set.storageLocation}` : ""}` : "Retired";
   return (
@@ -134,7 +168,13 @@ function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; 
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h3 className="text-lg font-bold">
-            <Link href={`/garage/sets/${set.id}`}>{setTitle(set)}</Link>
+            {canManage ? (
+              <Link href={`/garage/sets/${set.id}`} className={linkClass}>
+                {setTitle(set)}
+              </Link>
+            ) : (
+              setTitle(set)
+            )}
           </h3>
           <p className="text-sm text-asphalt-600">
             {SET_KIND_LABELS[set.kind]} · {set.size} · {state}
@@ -155,10 +195,12 @@ function SetCard({ set, vehicleId, mounted, depthUnit, files }: { set: SetView; 
       ) : null}
       {files.length ? <FileList files={files} /> : null}
       <div className="flex flex-wrap gap-2">
-        <Link href={`/garage/sets/${set.id}`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
-          Wear chart and details
-        </Link>
-        {set.state === "stored" ? <SwapControl set={set} vehicleId={vehicleId} mounted={mounted} /> : null}
+        {canManage ? (
+          <Link href={`/garage/sets/${set.id}`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
+            Wear chart and details
+          </Link>
+        ) : null}
+        {canManage && set.state === "stored" ? <SwapControl set={set} vehicleId={vehicleId} mounted={mounted} /> : null}
       </div>
     </Card>
   );

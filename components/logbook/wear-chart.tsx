@@ -57,7 +57,17 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
     const projection = last && end && end.x > last.x ? [last, end] : [];
     return { tire: t, points, projection, look: LOOK[i % LOOK.length], name: POSITION_LABELS[t.position] };
   });
+  // The axis runs to the first tire's projected limit plus a margin, so a far-off projection of a
+  // slow-wearing tire cannot squeeze the measured readings into a corner; longer lines are clipped.
+  const lastX = Math.max(...lines.flatMap((l) => l.points.map((p) => p.x)));
+  const firstX = Math.min(...lines.flatMap((l) => l.points.map((p) => p.x)));
+  const ends = lines.flatMap((l) => (l.projection[1] ? [l.projection[1].x] : []));
+  const span = Math.max(lastX - firstX, axis === "date" ? 90 * 86_400_000 : 3_000);
+  const xMax = ends.length ? Math.max(lastX, Math.min(Math.max(...ends), Math.min(...ends) + span * 0.5)) : lastX;
   const unitLabel = depthUnit === "32nds" ? "32nds in" : "mm";
+  // Evenly spaced ticks, so labels never pile up where several projections end.
+  const ticks = xMax > firstX ? [0, 1, 2, 3, 4].map((i) => Math.round(firstX + ((xMax - firstX) * i) / 4)) : [firstX];
+  const tickFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)).replace(/^\d+ /, "") : `${Math.round(v / 1000)}k ${distanceUnit}`);
   const xFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
 
   return (
@@ -82,9 +92,9 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
       </div>
       <div className="h-72 w-full sm:h-96" data-testid="wear-chart">
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart margin={{ top: 10, right: 16, bottom: 8, left: 0 }}>
+          <LineChart margin={{ top: 10, right: 36, bottom: 8, left: 0 }}>
             <CartesianGrid strokeDasharray="3 3" stroke="#d5d9df" />
-            <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} scale={axis === "date" ? "time" : "linear"} tickFormatter={xFormat} tick={{ fontSize: 12 }} allowDuplicatedCategory={false} />
+            <XAxis dataKey="x" type="number" domain={[firstX, xMax]} allowDataOverflow ticks={ticks} interval={0} tickFormatter={tickFormat} tick={{ fontSize: 12 }} allowDuplicatedCategory={false} />
             <YAxis dataKey="y" type="number" domain={[0, "auto"]} tick={{ fontSize: 12 }} width={40} unit={depthUnit === "mm" ? "" : ""} />
             <Tooltip labelFormatter={(v) => xFormat(Number(v))} formatter={(v, n) => [`${v} ${unitLabel}`, n]} />
             <Legend />
@@ -113,6 +123,7 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
                   strokeDasharray="6 4"
                   dot={false}
                   legendType="none"
+                  tooltipType="none"
                   isAnimationActive={false}
                 />
               ))}

@@ -357,9 +357,7 @@ export async function listGarage({ userId, today }: { userId: string; today: str
     vehicles: vehicles.map((v) => {
       const mine = sets.filter((s) => s.vehicleId === v.id);
       const mounted = mine.find((s) => s.state === "mounted") ?? null;
-      const next = items
-        .filter((i) => i.vehicleId === v.id)
-        .sort((a, b) => a.date.localeCompare(b.date))[0];
+      const next = nextReminderOf(items.filter((i) => i.vehicleId === v.id), today);
       const lc = lastChecks.find((c) => c.vehicleId === v.id);
       return {
         id: v.id,
@@ -377,6 +375,19 @@ export async function listGarage({ userId, today }: { userId: string; today: str
       };
     }),
   };
+}
+
+/**
+ * The one reminder the garage shows per vehicle: an overdue "replace" first
+ * (it matters most), then the soonest upcoming item, else the latest overdue one.
+ */
+function nextReminderOf(items: ReminderItem[], today: string): ReminderItem | undefined {
+  const byDate = [...items].sort((a, b) => a.date.localeCompare(b.date));
+  return (
+    byDate.find((i) => i.overdue && i.severity === "replace") ??
+    byDate.find((i) => i.date >= today) ??
+    byDate.at(-1)
+  );
 }
 
 /** The driver's stored reminder settings, keeping only what lib/tires understands. */

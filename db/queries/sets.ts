@@ -31,7 +31,7 @@ export async function createSetWithTires({
   return db.transaction(async (tx) => {
     await assertVehicleAccess(access, { vehicleId, write: true, action: "add_set", detail: `${input.size} (${input.tires.length} tires)` }, tx);
     const odometerKm = odometerKmOf(input);
-    await guardOdometer(tx, { vehicleId, km: odometerKm, confirmed: false });
+    await guardOdometer(tx, { vehicleId, km: odometerKm, confirmed: input.confirmLowerOdometer });
 
     const replaced: { id: string; fate: "stored" | "retired" }[] = [];
     if (input.mountNow) {

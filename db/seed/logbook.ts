@@ -243,7 +243,6 @@ export async function seedLogbook(ctx: SeedContext) {
       kind: "inspection",
       performedOn: month(-5),
       odometerKm: kmAt(-5),
-      costCents: 0,
       notes: "Front-left worn on the inner edge: alignment advised.",
       shopId: DEMO_SHOP.id,
       authorUserId: ids.jo,

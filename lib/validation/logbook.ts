@@ -168,6 +168,7 @@ export const setPurchaseSchema = z
     depthUnit,
     odometer: optNumber(0, 3_000_000, "The odometer"),
     odometerUnit: distanceUnit,
+    confirmLowerOdometer: bool.default(false),
     /** Whether the new set goes on the car now, or into storage. */
     mountNow: bool.default(true),
     storageLocation: optText(120),

@@ -1,7 +1,7 @@
 import { CalendarClock, Gauge, Plus, Warehouse } from "lucide-react";
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { formatDate, setTitle } from "@/components/logbook/format";
+import { formatDate, linkClass, setTitle } from "@/components/logbook/format";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { Card } from "@/components/ui/card";
 import { ConditionBadge } from "@/components/ui/condition-badge";
@@ -65,7 +65,7 @@ export default async function GaragePage() {
                     <dd>
                       {v.mountedSet ? (
                         <>
-                          On the car: <Link href={`/garage/sets/${v.mountedSet.id}`}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
+                          On the car: <Link href={`/garage/sets/${v.mountedSet.id}`} className={linkClass}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
                         </>
                       ) : (
                         <>No set on the car in the logbook.</>
@@ -106,7 +106,7 @@ export default async function GaragePage() {
                       <Warehouse aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
                       <dd className="flex flex-wrap items-center gap-2">
                         <span>
-                          Stored: <Link href={`/garage/sets/${s.id}`}>{setTitle(s)}</Link>
+                          Stored: <Link href={`/garage/sets/${s.id}`} className={linkClass}>{setTitle(s)}</Link>
                           {s.storageLocation ? ` at ${s.storageLocation}` : ""}
                         </span>
                         {s.condition ? <ConditionBadge condition={s.condition} className="text-xs" /> : null}

@@ -157,6 +157,20 @@ describe("a tire purchase", () => {
     expect(old).toMatchObject({ state: "stored", storageLocation: "Garage loft" });
   });
 
+  it("a purchase with an odometer below the last reading asks first (409), then saves when confirmed", async () => {
+    const ada = await signUp();
+    const vehicleId = await makeVehicle(ada);
+    await makeSet(ada, vehicleId);
+    const before = await rows(tireSet);
+    const body = purchaseBody({ odometer: "40000", replacedFate: "retired" });
+    const res = await createSet(request(`/api/vehicles/${vehicleId}/sets`, { as: ada, body }), ctx({ vehicleId }));
+    expect(res.status).toBe(409);
+    expect((await json(res)).error!.fields!.odometer).toBeDefined();
+    expect(await rows(tireSet)).toBe(before);
+    await makeSet(ada, vehicleId, { odometer: "40000", replacedFate: "retired", confirmLowerOdometer: true });
+    expect(await rows(tireSet)).toBe(before + 1);
+  });
+
   it("a failure half-way through the transaction leaves no set, no tire and the old set on the car", async () => {
     const ada = await signUp();
     const vehicleId = await makeVehicle(ada);

@@ -1,0 +1,97 @@
+"use client";
+// A driver's own service entry (rotation, balancing, repair…) on the vehicle page.
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import { useForm, type Path, type Resolver } from "react-hook-form";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Select, Textarea } from "@/components/ui/field";
+import { SERVICE_KIND_LABELS, SERVICE_KINDS, serviceEntrySchema, todayIso } from "@/lib/validation/logbook";
+import { api, ApiError, keys } from "./api";
+
+type Values = { kind: (typeof SERVICE_KINDS)[number]; setId: string; performedOn: string; odometer: string; odometerUnit: "km" | "mi"; confirmLowerOdometer: boolean; cost: string; notes: string };
+
+export function ServiceEntryForm({ vehicleId, sets, odometerUnit }: { vehicleId: string; sets: { id: string; name: string }[]; odometerUnit: "km" | "mi" }) {
+  const queryClient = useQueryClient();
+  const [open, setOpen] = useState(false);
+  const form = useForm<Values>({
+    resolver: zodResolver(serviceEntrySchema) as unknown as Resolver<Values>,
+    defaultValues: { kind: "rotation", setId: sets[0]?.id ?? "", performedOn: todayIso(), odometer: "", odometerUnit, confirmLowerOdometer: false, cost: "", notes: "" },
+  });
+  const save = useMutation({
+    mutationFn: (v: unknown) => api(`/api/vehicles/${vehicleId}/service-entries`, { body: v }),
+    onSuccess: async () => {
+      setOpen(false);
+      form.reset();
+      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }), queryClient.invalidateQueries({ queryKey: keys.garage })]);
+    },
+    onError: (e) => {
+      if (e instanceof ApiError) for (const [k, m] of Object.entries(e.fields)) form.setError(k as Path<Values>, { message: m[0] });
+    },
+  });
+  const err = save.error instanceof ApiError ? save.error : null;
+  const e = (k: keyof Values) => form.formState.errors[k]?.message;
+  if (!open) {
+    return (
+      <Button type="button" variant="secondary" size="sm" onClick={() => setOpen(true)}>
+        Add a service entry
+      </Button>
+    );
+  }
+  return (
+    <form noValidate className="space-y-3 rounded border border-asphalt-200 bg-white p-3" onSubmit={form.handleSubmit((v) => save.mutate(v))}>
+      {err ? <Alert tone="error">{err.message}</Alert> : null}
+      <div className="grid gap-3 sm:grid-cols-3">
+        <Field label="Work done" error={e("kind")}>
+          {({ id }) => (
+            <Select id={id} {...form.register("kind")}>
+              {SERVICE_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {SERVICE_KIND_LABELS[k]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Set" error={e("setId")}>
+          {({ id }) => (
+            <Select id={id} {...form.register("setId")}>
+              <option value="">No particular set</option>
+              {sets.map((s) => (
+                <option key={s.id} value={s.id}>
+                  {s.name}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Date" error={e("performedOn")}>
+          {({ id, describedBy, invalid }) => <Input id={id} type="date" max={todayIso()} aria-describedby={describedBy} aria-invalid={invalid} {...form.register("performedOn")} />}
+        </Field>
+        <Field label={`Odometer (${odometerUnit}, optional)`} error={e("odometer")}>
+          {({ id, describedBy, invalid }) => <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} {...form.register("odometer")} />}
+        </Field>
+        <Field label="Cost (optional)" error={e("cost")}>
+          {({ id, describedBy, invalid }) => <Input id={id} inputMode="decimal" aria-describedby={describedBy} aria-invalid={invalid} {...form.register("cost")} />}
+        </Field>
+      </div>
+      {err?.code === "conflict" ? (
+        <label className="flex min-h-11 items-center gap-2 text-sm">
+          <input type="checkbox" className="size-5" {...form.register("confirmLowerOdometer")} /> The lower odometer reading is right
+        </label>
+      ) : null}
+      <Field label="Notes (optional)" error={e("notes")}>
+        {({ id, describedBy }) => <Textarea id={id} aria-describedby={describedBy} {...form.register("notes")} />}
+      </Field>
+      <div className="flex gap-2">
+        <Button type="submit" size="sm" pending={save.isPending} pendingLabel="Saving…">
+          Save the entry
+        </Button>
+        <Button type="button" size="sm" variant="ghost" onClick={() => setOpen(false)}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}
