@@ -71,7 +71,7 @@ test("a driver shares a logbook with a shop, the technician adds to it, and the 
 
   // --- The driver ends the pass; the technician's page is still open.
   await passes.open();
-  await passes.revoke("Quillby Tread Works");
+  await passes.revoke("Quillby Tread Works", nickname);
   await tech.setViewportSize({ width: 820, height: 1180 });
   await shop.recordWork("Inspection", "41960", "One more look.");
   await expect(tech.getByText("The driver withdrew this pass").first()).toBeVisible();

@@ -47,8 +47,9 @@ export class DriverPassesPage {
     return this.page.locator("section[aria-labelledby=access-log] > div").filter({ has: this.page.getByRole("heading", { name: vehicle }) });
   }
 
-  async revoke(shop: string) {
-    const card = this.pass(shop);
+  /** Ends the pass to `shop` whose card names `vehicle` (the demo has other passes to the same shop). */
+  async revoke(shop: string, vehicle: string) {
+    const card = this.pass(shop).filter({ hasText: vehicle });
     await card.getByRole("button", { name: "End the pass now" }).click();
     await card.getByRole("button", { name: "Yes, end it now" }).click();
     await expect(this.page.getByText(`${shop} can no longer open the logbook.`)).toBeVisible();
