@@ -6,7 +6,7 @@ const config = [
   ...nextVitals,
   ...nextTs,
   {
-    ignores: [".next/**", ".next-*/**", "node_modules/**", "coverage/**", "db/migrations/**", "next-env.d.ts", "test-results/**", "playwright-report/**"],
+    ignores: [".next/**", ".next-*/**", "node_modules/**", "coverage/**", "db/migrations/**", "next-env.d.ts", "test-results/**", "playwright-report/**", "tests/e2e/artifacts/**", "tests/e2e/.data-*/**"],
   },
   {
     plugins: { drizzle },
