@@ -19,9 +19,9 @@ import {
 } from "@/db/schema";
 import type { LogbookAccess } from "@/lib/auth/logbook-access";
 import { notFound } from "@/lib/errors";
-import { axlePattern, computeReminders, JURISDICTIONS, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
+import { axlePattern, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
+import { remindersFor } from "./reminders";
 import { assertVehicleAccess } from "./access";
-import { loadLogbookInput } from "./logbook-input";
 import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireView } from "./logbook-view";
 import type { Condition } from "@/lib/tires";
 
@@ -313,7 +313,7 @@ export async function listGarage({ userId, today }: { userId: string; today: str
   const vehicles = await db.select().from(vehicle).where(eq(vehicle.ownerId, userId)).orderBy(asc(vehicle.createdAt));
   if (vehicles.length === 0) return { vehicles: [], prefs, caution: CAUTION };
   const ids = vehicles.map((v) => v.id);
-  const [sets, tires, readings, lastChecks, input] = await Promise.all([
+  const [sets, tires, readings, lastChecks, reminders] = await Promise.all([
     db.select().from(tireSet).where(and(inArray(tireSet.vehicleId, ids), inArray(tireSet.state, ["mounted", "stored"]))),
     db.select({ t: tire }).from(tire).innerJoin(tireSet, eq(tire.setId, tireSet.id)).where(inArray(tireSet.vehicleId, ids)),
     db
@@ -326,8 +326,10 @@ export async function listGarage({ userId, today }: { userId: string; today: str
       .from(treadCheck)
       .where(inArray(treadCheck.vehicleId, ids))
       .orderBy(treadCheck.vehicleId, desc(treadCheck.checkedOn), desc(treadCheck.createdAt)),
-    loadLogbookInput({ ownerId: userId }),
+    // The same items, settings and plan as the reminders page and the feed.
+    remindersFor({ userId, today }),
   ]);
+  const items = reminders?.items ?? [];
   const rows: ReadingRow[] = readings.map(({ r, checkedOn, odometerKm }) => ({
     checkId: r.checkId,
     tireId: r.tireId,
@@ -339,9 +341,6 @@ export async function listGarage({ userId, today }: { userId: string; today: str
     pressureKpa: r.pressureKpa,
     approximate: r.approximate,
   }));
-  const settings = reminderSettingsOf(prefs);
-  const reminders = computeReminders(input, settings, { today });
-  const items = reminders.ok ? reminders.items : [];
 
   const condOf = (s: typeof tireSet.$inferSelect) => {
     const limit = limitFor(s, prefs.jurisdiction, today);
@@ -378,26 +377,15 @@ export async function listGarage({ userId, today }: { userId: string; today: str
 }
 
 /**
- * The one reminder the garage shows per vehicle: an overdue "replace" first
- * (it matters most), then the soonest upcoming item, else the latest overdue one.
+ * The one reminder the garage shows per vehicle. Something already due comes
+ * before anything upcoming: an overdue "replace" first (it matters most), then
+ * the most recent other overdue item (a missed seasonal swap, a rotation),
+ * else the soonest upcoming one.
  */
-function nextReminderOf(items: ReminderItem[], today: string): ReminderItem | undefined {
+export function nextReminderOf(items: ReminderItem[], today: string): ReminderItem | undefined {
   const byDate = [...items].sort((a, b) => a.date.localeCompare(b.date));
-  return (
-    byDate.find((i) => i.overdue && i.severity === "replace") ??
-    byDate.find((i) => i.date >= today) ??
-    byDate.at(-1)
-  );
-}
-
-/** The driver's stored reminder settings, keeping only what lib/tires understands. */
-function reminderSettingsOf(prefs: Prefs & { reminderSettings: unknown }) {
-  const raw = (prefs.reminderSettings ?? {}) as Record<string, unknown>;
-  const out: Record<string, unknown> = { jurisdiction: prefs.jurisdiction };
-  if (typeof raw.jurisdiction === "string" && JURISDICTIONS.includes(raw.jurisdiction as Jurisdiction)) out.jurisdiction = raw.jurisdiction;
-  for (const k of ["customDepthMm", "planLeadMonths", "rotationIntervalKm"]) if (typeof raw[k] === "number") out[k] = raw[k];
-  for (const k of ["autumnSwap", "springSwap"]) if (typeof raw[k] === "string") out[k] = raw[k];
-  return out;
+  const overdue = byDate.filter((i) => i.overdue || i.date < today);
+  return overdue.find((i) => i.severity === "replace") ?? overdue.at(-1) ?? byDate.find((i) => i.date >= today);
 }
 
 /** The driver's vehicles for pickers (purchase and check forms). */
