@@ -7,7 +7,7 @@ import { fail, type Result } from "./result";
 /**
  * Maximum load per tire in kg for load indices 0–200 [pub]: French Arrêté of
  * 24 October 1994, annex II, which reproduces the ETRTO / UN Regulation No. 30
- * table. Proofreading against that transcription found one row off the
+ * table. Proofreading against a copy of that table found one row off the
  * table's geometric series: index 59 reads 240 kg there, but the series
  * (58 = 236, 60 = 250, steps of about 2.9 %) and secondary tables give
  * 243 kg [sec], which is used here.

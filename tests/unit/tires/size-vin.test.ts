@@ -27,7 +27,7 @@ describe(`load index → kg [pub: ${ARRETE}]`, () => {
     expect(loadIndexKg(li)).toEqual({ ok: true, loadIndex: li, kg });
   });
 
-  it("[sec: secondary load-index tables; the reference transcription reads 240] LI 59 = 243 kg", () => {
+  it("[sec: secondary load-index tables; a copy of the published table reads 240] LI 59 = 243 kg", () => {
     expect(loadIndexKg(59)).toMatchObject({ kg: 243 });
   });
 
