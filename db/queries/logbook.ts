@@ -161,17 +161,7 @@ export async function getVehicleLogbook({
     db.select().from(odometerReading).where(eq(odometerReading.vehicleId, vehicleId)),
   ]);
 
-  const readingRows: ReadingRow[] = readings.map(({ r, checkedOn, odometerKm }) => ({
-    checkId: r.checkId,
-    tireId: r.tireId,
-    checkedOn,
-    odometerKm,
-    innerMm: r.innerMm,
-    centreMm: r.centreMm,
-    outerMm: r.outerMm,
-    pressureKpa: r.pressureKpa,
-    approximate: r.approximate,
-  }));
+  const readingRows: ReadingRow[] = readings.map(toReadingRow);
 
   const odometer: VehicleLogbook["odometer"] = [
     ...odos.map((o) => ({ date: o.readOn, odometerKm: o.odometerKm, source: "reading" as const })),
@@ -330,17 +320,7 @@ export async function listGarage({ userId, today }: { userId: string; today: str
     remindersFor({ userId, today }),
   ]);
   const items = reminders?.items ?? [];
-  const rows: ReadingRow[] = readings.map(({ r, checkedOn, odometerKm }) => ({
-    checkId: r.checkId,
-    tireId: r.tireId,
-    checkedOn,
-    odometerKm,
-    innerMm: r.innerMm,
-    centreMm: r.centreMm,
-    outerMm: r.outerMm,
-    pressureKpa: r.pressureKpa,
-    approximate: r.approximate,
-  }));
+  const rows: ReadingRow[] = readings.map(toReadingRow);
 
   const condOf = (s: typeof tireSet.$inferSelect) => {
     const limit = limitFor(s, prefs.jurisdiction, today);
@@ -411,4 +391,19 @@ export async function setUnits({ userId, units, pressureUnit }: { userId: string
     .values({ userId, units, pressureUnit })
     .onConflictDoUpdate({ target: driverProfile.userId, set: { units, pressureUnit, updatedAt: new Date() } });
   return { units, pressureUnit };
+}
+
+/** A tread reading joined with its check, as the views use it. */
+function toReadingRow({ r, checkedOn, odometerKm }: { r: typeof treadReading.$inferSelect; checkedOn: string; odometerKm: number | null }): ReadingRow {
+  return {
+    checkId: r.checkId,
+    tireId: r.tireId,
+    checkedOn,
+    odometerKm,
+    innerMm: r.innerMm,
+    centreMm: r.centreMm,
+    outerMm: r.outerMm,
+    pressureKpa: r.pressureKpa,
+    approximate: r.approximate,
+  };
 }
