@@ -2,6 +2,7 @@
 // Extend or withdraw one of the driver's passes.
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
+import { toast } from "sonner";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
@@ -14,7 +15,7 @@ export function PassActions({ passId, shopName }: { passId: string; shopName: st
   const [duration, setDuration] = useState("24h");
   const [busy, setBusy] = useState<"extend" | "revoke" | null>(null);
   const [confirming, setConfirming] = useState(false);
-  const [message, setMessage] = useState<{ tone: "error" | "success"; text: string } | null>(null);
+  const [message, setMessage] = useState<{ tone: "error"; text: string } | null>(null);
 
   async function run(kind: "extend" | "revoke") {
     setBusy(kind);
@@ -23,7 +24,8 @@ export function PassActions({ passId, shopName }: { passId: string; shopName: st
     setBusy(null);
     setConfirming(false);
     if (!res.ok) return setMessage({ tone: "error", text: res.message });
-    setMessage({ tone: "success", text: kind === "extend" ? "The pass lasts longer now." : `${shopName} can no longer open the logbook.` });
+    // A toast, not an inline message: a withdrawn pass leaves the list on refresh, and its card with it.
+    toast.success(kind === "extend" ? "The pass lasts longer now." : `${shopName} can no longer open the logbook.`);
     router.refresh();
   }
 
