@@ -1,5 +1,6 @@
 "use client";
 // A driver's own service entry (rotation, balancing, repair…) on the vehicle page.
+import { FormActions } from "@/components/ui/form-actions";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
@@ -84,14 +85,7 @@ export function ServiceEntryForm({ vehicleId, sets, odometerUnit }: { vehicleId:
       <Field label="Notes (optional)" error={e("notes")}>
         {({ id, describedBy }) => <Textarea id={id} aria-describedby={describedBy} {...form.register("notes")} />}
       </Field>
-      <div className="flex gap-2">
-        <Button type="submit" size="sm" pending={save.isPending} pendingLabel="Saving…">
-          Save the entry
-        </Button>
-        <Button type="button" size="sm" variant="ghost" onClick={() => setOpen(false)}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions pending={save.isPending} submitLabel="Save the entry" pendingLabel="Saving…" onCancel={() => setOpen(false)} />
     </form>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
 // The set's own name, storage place and limits (overriding the defaults of
 // the computation core), or retiring it.
+import { FormActions } from "@/components/ui/form-actions";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
@@ -74,14 +75,7 @@ export function SetSettings({ set, vehicleId }: { set: SetView; vehicleId: strin
           <input type="checkbox" className="size-5" {...form.register("retire")} /> Retire this set (worn out, sold or thrown away)
         </label>
       ) : null}
-      <div className="flex gap-2">
-        <Button type="submit" size="sm" pending={save.isPending} pendingLabel="Saving…">
-          Save
-        </Button>
-        <Button type="button" size="sm" variant="ghost" onClick={() => setOpen(false)}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions pending={save.isPending} submitLabel="Save" pendingLabel="Saving…" onCancel={() => setOpen(false)} />
     </form>
   );
 }

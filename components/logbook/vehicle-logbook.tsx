@@ -1,6 +1,8 @@
 "use client";
 // One vehicle's logbook: its sets (with the seasonal swap), files, history
 // and the shops' access log. Data through TanStack Query, seeded by the server.
+import { FormActions } from "@/components/ui/form-actions";
+import { AccessLogTable } from "@/components/passes/access-log-table";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
@@ -106,45 +108,13 @@ export function VehicleLogbookView({
           {book.accessLog.length === 0 ? (
             <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/garage/passes" className={linkClass}>Shop passes</Link>.</p>
           ) : (
-            <div className="overflow-x-auto rounded border border-asphalt-200">
-              <table className="w-full min-w-[32rem] text-left text-sm">
-                <thead className="bg-asphalt-100">
-                  <tr>
-                    <th scope="col" className="px-3 py-2">When</th>
-                    <th scope="col" className="px-3 py-2">Who</th>
-                    <th scope="col" className="px-3 py-2">What</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {book.accessLog.map((l) => (
-                    <tr key={l.id} className="border-t border-asphalt-200">
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDate(l.at)} {l.at.slice(11, 16)} UTC</td>
-                      <td className="px-3 py-2">
-                        {l.actorName}, {l.shopName}
-                      </td>
-                      <td className="px-3 py-2">{ACTION_LABEL[l.action] ?? l.action}{l.detail ? ` — ${l.detail}` : ""}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
+            <AccessLogTable rows={book.accessLog} />
           )}
         </section>
       ) : null}
     </>
   );
 }
-
-const ACTION_LABEL: Record<string, string> = {
-  read_logbook: "Opened the logbook",
-  read_set: "Opened a set",
-  add_check: "Added a tread check",
-  add_service: "Added a service entry",
-  add_set: "Logged a set",
-  swap_set: "Swapped sets",
-  upload: "Uploaded a file",
-  download: "Opened a file",
-};
 
 function SetCard({
   set,
@@ -257,14 +227,7 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
           <input type="checkbox" className="size-5" checked={confirmLower} onChange={(e) => setConfirmLower(e.target.checked)} /> The lower reading is right
         </label>
       ) : null}
-      <div className="flex gap-2">
-        <Button type="submit" size="sm" pending={swap.isPending} pendingLabel="Swapping…">
-          Save the swap
-        </Button>
-        <Button type="button" size="sm" variant="ghost" onClick={() => setOpen(false)}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions pending={swap.isPending} submitLabel="Save the swap" pendingLabel="Swapping…" onCancel={() => setOpen(false)} />
     </form>
   );
 }

@@ -5,6 +5,7 @@ const ACTION_LABEL: Record<string, string> = {
   add_check: "Recorded a tread check",
   add_set: "Logged a fitted set",
   read_set: "Opened a set",
+  swap_set: "Swapped sets",
   download: "Opened a file",
   upload: "Added a file",
 };
