@@ -6,6 +6,15 @@ const nextConfig = {
   // Separate build folders let an e2e run build beside a dev server.
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
+  // The driver's pages lived under /garage before the vehicles overview got
+  // its own name; old bookmarks, e-mails and calendar links keep working.
+  async redirects() {
+    return [
+      { source: "/garage", destination: "/vehicles", permanent: true },
+      { source: "/garage/vehicles/:path*", destination: "/vehicles/:path*", permanent: true },
+      { source: "/garage/:path*", destination: "/:path*", permanent: true },
+    ];
+  },
   experimental: {
     serverActions: { bodySizeLimit: "12mb" },
   },

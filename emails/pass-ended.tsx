@@ -36,5 +36,5 @@ PassEndedEmail.PreviewProps = {
   vehicles: ["The green Velora"],
   how: "expired",
   entriesAdded: 2,
-  passesUrl: "http://localhost:3000/garage/passes",
+  passesUrl: "http://localhost:3000/passes",
 };

@@ -36,6 +36,6 @@ PlusReceiptEmail.PreviewProps = {
   amount: "€24.00",
   period: "1 Dec 2026 – 30 Nov 2027",
   receiptNumber: "FP-0001",
-  accountUrl: "http://localhost:3000/garage/account",
+  accountUrl: "http://localhost:3000/account",
   unsubscribeUrl: "http://localhost:3000/unsubscribe/preview",
 } satisfies PlusReceiptEmailProps;

@@ -64,10 +64,10 @@ ReminderDigestEmail.PreviewProps = {
       overdue: false,
       reason: "The first tire of this set should reach the 1.6 mm limit around 61,000 km.",
       whatToDo: "Measure the tread again and plan new tires if the reading confirms it.",
-      url: "http://localhost:3000/garage/sets/preview",
+      url: "http://localhost:3000/sets/preview",
     },
   ],
-  remindersUrl: "http://localhost:3000/garage/reminders",
+  remindersUrl: "http://localhost:3000/reminders",
   unsubscribeUrl: "http://localhost:3000/unsubscribe/preview",
   caution: "These figures are guidance only.",
 } satisfies ReminderDigestEmailProps;

@@ -34,5 +34,5 @@ ShopEntryEmail.PreviewProps = {
   technicianName: "Jo Marsh",
   vehicle: "The green Velora",
   summary: "a rotation with a tread check of 4 tires.",
-  logbookUrl: "http://localhost:3000/garage",
+  logbookUrl: "http://localhost:3000/vehicles",
 };

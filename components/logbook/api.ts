@@ -68,7 +68,7 @@ export function uploadFile(
 }
 
 export const keys = {
-  garage: ["garage"] as const,
+  overview: ["vehicles-overview"] as const,
   vehicle: (id: string) => ["vehicle", id] as const,
   set: (id: string) => ["set", id] as const,
 };

@@ -107,9 +107,9 @@ export function CheckForm({
             await Promise.all([
               queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicle.id) }),
               queryClient.invalidateQueries({ queryKey: keys.set(values.setId) }),
-              queryClient.invalidateQueries({ queryKey: keys.garage }),
+              queryClient.invalidateQueries({ queryKey: keys.overview }),
             ]);
-            router.push(`/garage/sets/${values.setId}?saved=check`);
+            router.push(`/sets/${values.setId}?saved=check`);
             router.refresh();
           } catch (e) {
             if (e instanceof ApiError) {

@@ -228,13 +228,13 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
           setSavedSetId(setId);
         }
         const ok = await uploadAll(vid, setId);
-        await queryClient.invalidateQueries({ queryKey: keys.garage });
+        await queryClient.invalidateQueries({ queryKey: keys.overview });
         await queryClient.invalidateQueries({ queryKey: keys.vehicle(vid) });
         if (!ok) {
           setFormError("The set is saved. Some files could not be uploaded: remove them or choose them again, then press the button once more.");
           return setPhase("editing");
         }
-        router.push(`/garage/vehicles/${vid}?saved=set`);
+        router.push(`/vehicles/${vid}?saved=set`);
         router.refresh();
       } catch (e) {
         setPhase("editing");
@@ -268,7 +268,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
                   {v.nickname} — {v.make} {v.model}
                 </option>
               ))}
-              {!createdVehicle ? <option value={NEW}>A vehicle not in the garage yet…</option> : null}
+              {!createdVehicle ? <option value={NEW}>A vehicle not in Fourpatch yet…</option> : null}
             </Select>
           )}
         </Field>
@@ -311,7 +311,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
             </>
           )}
         </Field>
-        <Field label="Name for the set (optional)" hint="For example “Summer tires” — shown in your garage and calendar.">
+        <Field label="Name for the set (optional)" hint="For example “Summer tires” — shown on your vehicles and in your calendar.">
           {({ id, describedBy }) => <Input id={id} aria-describedby={describedBy} autoComplete="off" {...register("label")} />}
         </Field>
       </Card>

@@ -25,7 +25,7 @@ export function ServiceEntryForm({ vehicleId, sets, odometerUnit }: { vehicleId:
     onSuccess: async () => {
       setOpen(false);
       form.reset();
-      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }), queryClient.invalidateQueries({ queryKey: keys.garage })]);
+      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
     },
     onError: (e) => {
       if (e instanceof ApiError) for (const [k, m] of Object.entries(e.fields)) form.setError(k as Path<Values>, { message: m[0] });

@@ -36,12 +36,12 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         title={setTitle(s)}
         description={
           <>
-            <Link href={`/garage/vehicles/${d.vehicle.id}`} className={linkClass}>{d.vehicle.nickname}</Link> · {SET_KIND_LABELS[s.kind]} · {s.size} · {state}
+            <Link href={`/vehicles/${d.vehicle.id}`} className={linkClass}>{d.vehicle.nickname}</Link> · {SET_KIND_LABELS[s.kind]} · {s.size} · {state}
           </>
         }
         actions={
           s.state !== "retired" ? (
-            <Link href={`/garage/vehicles/${d.vehicle.id}/check?set=${s.id}`} className={buttonVariants()}>
+            <Link href={`/vehicles/${d.vehicle.id}/check?set=${s.id}`} className={buttonVariants()}>
               Record a tread check
             </Link>
           ) : null

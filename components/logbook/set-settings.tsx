@@ -39,7 +39,7 @@ export function SetSettings({ set, vehicleId }: { set: SetView; vehicleId: strin
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: keys.set(set.id) }),
         queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }),
-        queryClient.invalidateQueries({ queryKey: keys.garage }),
+        queryClient.invalidateQueries({ queryKey: keys.overview }),
       ]);
     },
     onError: (e) => {

@@ -58,8 +58,8 @@ export function VehicleForm({ pressureUnit, odometerUnit, then }: { pressureUnit
         setError(null);
         try {
           const res = await api<{ vehicle: { id: string } }>("/api/vehicles", { body: values });
-          await queryClient.invalidateQueries({ queryKey: keys.garage });
-          router.push(then === "log-purchase" ? `/garage/log-purchase?vehicle=${res.vehicle.id}` : `/garage/vehicles/${res.vehicle.id}`);
+          await queryClient.invalidateQueries({ queryKey: keys.overview });
+          router.push(then === "log-purchase" ? `/log-purchase?vehicle=${res.vehicle.id}` : `/vehicles/${res.vehicle.id}`);
           router.refresh();
         } catch (err) {
           if (err instanceof ApiError) {

@@ -55,10 +55,10 @@ export function VehicleLogbookView({
         actions={
           canManage ? (
           <>
-            <Link href={`/garage/vehicles/${id}/check`} className={buttonVariants()}>
+            <Link href={`/vehicles/${id}/check`} className={buttonVariants()}>
               Record a tread check
             </Link>
-            <Link href={`/garage/log-purchase?vehicle=${id}`} className={buttonVariants({ variant: "secondary" })}>
+            <Link href={`/log-purchase?vehicle=${id}`} className={buttonVariants({ variant: "secondary" })}>
               Log a purchase
             </Link>
           </>
@@ -74,7 +74,7 @@ export function VehicleLogbookView({
         </h2>
         {book.sets.length === 0 ? (
           <Card>
-            <p>No sets yet. <Link href={`/garage/log-purchase?vehicle=${id}`} className={linkClass}>Log the tires on this vehicle</Link>.</p>
+            <p>No sets yet. <Link href={`/log-purchase?vehicle=${id}`} className={linkClass}>Log the tires on this vehicle</Link>.</p>
           </Card>
         ) : null}
         {book.sets.map((s) => (
@@ -106,7 +106,7 @@ export function VehicleLogbookView({
             Who looked at this logbook
           </h2>
           {book.accessLog.length === 0 ? (
-            <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/garage/passes" className={linkClass}>Shop passes</Link>.</p>
+            <p className="text-asphalt-600">No shop has opened this logbook. Give a shop a pass from <Link href="/passes" className={linkClass}>Shop passes</Link>.</p>
           ) : (
             <AccessLogTable rows={book.accessLog} />
           )}
@@ -139,7 +139,7 @@ function SetCard({
         <div>
           <h3 className="text-lg font-bold">
             {canManage ? (
-              <Link href={`/garage/sets/${set.id}`} className={linkClass}>
+              <Link href={`/sets/${set.id}`} className={linkClass}>
                 {setTitle(set)}
               </Link>
             ) : (
@@ -166,7 +166,7 @@ function SetCard({
       {files.length ? <FileList files={files} /> : null}
       <div className="flex flex-wrap gap-2">
         {canManage ? (
-          <Link href={`/garage/sets/${set.id}`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
+          <Link href={`/sets/${set.id}`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
             Wear chart and details
           </Link>
         ) : null}
@@ -189,7 +189,7 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
       setOpen(false);
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }),
-        queryClient.invalidateQueries({ queryKey: keys.garage }),
+        queryClient.invalidateQueries({ queryKey: keys.overview }),
       ]);
     },
   });

@@ -2,7 +2,7 @@
 // The calendar feed: make a link, copy it, scan it, or turn it off.
 import { CalendarPlus, Check, Copy, Laptop, Globe, Smartphone } from "lucide-react";
 import { useState, useTransition } from "react";
-import { createFeedLink, turnOffFeed, type NewFeed } from "@/app/(garage)/garage/reminders/actions";
+import { createFeedLink, turnOffFeed, type NewFeed } from "@/app/(driver)/reminders/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 

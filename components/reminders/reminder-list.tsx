@@ -23,7 +23,7 @@ export function ReminderList({ items }: { items: ReminderItem[] }) {
     return (
       <p className="text-asphalt-700">
         Nothing dated yet. Reminders appear once your sets have DOT codes and tread checks —{" "}
-        <Link href="/garage/log-purchase">log a tire purchase</Link> to start.
+        <Link href="/log-purchase">log a tire purchase</Link> to start.
       </p>
     );
   }

@@ -5,7 +5,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { saveReminderSettingsAction } from "@/app/(garage)/garage/reminders/actions";
+import { saveReminderSettingsAction } from "@/app/(driver)/reminders/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";

@@ -1,5 +1,5 @@
 import "server-only";
-// Reading a driver's logbook: the garage overview, one vehicle's whole
+// Reading a driver's logbook: the vehicles overview, one vehicle's whole
 // logbook, one set. Every read goes through assertVehicleAccess first.
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import { db, type Transaction } from "@/db";
@@ -284,7 +284,7 @@ export async function getSetDetail({ access, setId, today }: { access: LogbookAc
 }
 export type SetDetail = Awaited<ReturnType<typeof getSetDetail>>;
 
-export type GarageVehicle = {
+export type VehicleSummary = {
   id: string;
   nickname: string;
   make: string;
@@ -298,7 +298,7 @@ export type GarageVehicle = {
 };
 
 /** The signed-in driver's own vehicles, each with its mounted set's condition, next reminder and last check. */
-export async function listGarage({ userId, today }: { userId: string; today: string }): Promise<{ vehicles: GarageVehicle[]; prefs: Prefs; caution: string }> {
+export async function listVehicleSummaries({ userId, today }: { userId: string; today: string }): Promise<{ vehicles: VehicleSummary[]; prefs: Prefs; caution: string }> {
   const prefs = await driverPrefs({ userId });
   const vehicles = await db.select().from(vehicle).where(eq(vehicle.ownerId, userId)).orderBy(asc(vehicle.createdAt));
   if (vehicles.length === 0) return { vehicles: [], prefs, caution: CAUTION };
@@ -357,7 +357,7 @@ export async function listGarage({ userId, today }: { userId: string; today: str
 }
 
 /**
- * The one reminder the garage shows per vehicle. Something already due comes
+ * The one reminder the vehicles overview shows per vehicle. Something already due comes
  * before anything upcoming: an overdue "replace" first (it matters most), then
  * the most recent other overdue item (a missed seasonal swap, a rotation),
  * else the soonest upcoming one.

@@ -430,7 +430,7 @@ export async function sendPassEndedNotice({ passId, now }: { passId: string; now
       vehicles: vehicles.map((v) => v.nickname),
       how,
       entriesAdded: await entriesUnderPass(passId),
-      passesUrl: `${appUrl()}/garage/passes`,
+      passesUrl: `${appUrl()}/passes`,
     }),
   });
   // Give the claim back when the e-mail could not go out, so the next run retries.
@@ -492,7 +492,7 @@ export async function notifyShopEntry({ access, vehicleId, summary, now = new Da
       technicianName: access.userName,
       vehicle: row.nickname,
       summary,
-      logbookUrl: `${appUrl()}/garage/vehicles/${vehicleId}`,
+      logbookUrl: `${appUrl()}/vehicles/${vehicleId}`,
     }),
   });
   return true;

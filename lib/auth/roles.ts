@@ -64,5 +64,5 @@ export async function requireShopMember(
 export async function homeFor(session: Session): Promise<string> {
   if (isAdmin(session)) return "/admin";
   const shops = await membershipsOf({ userId: session.user.id });
-  return shops.length > 0 ? "/shop" : "/garage";
+  return shops.length > 0 ? "/shop" : "/vehicles";
 }

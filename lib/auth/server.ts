@@ -55,7 +55,7 @@ function createAuth() {
               to: user.email,
               subject: "Your Fourpatch logbook is ready",
               kind: "welcome",
-              react: createElement(WelcomeEmail, { name: user.name, garageUrl: `${appUrl()}/garage` }),
+              react: createElement(WelcomeEmail, { name: user.name, vehiclesUrl: `${appUrl()}/vehicles` }),
             });
           },
         },

@@ -15,11 +15,11 @@ export function whatToDo(kind: ReminderKind): string {
 }
 
 export function logbookPath(item: Pick<ReminderItem, "vehicleId" | "setId">): string {
-  return item.setId ? `/garage/sets/${item.setId}` : `/garage/vehicles/${item.vehicleId}`;
+  return item.setId ? `/sets/${item.setId}` : `/vehicles/${item.vehicleId}`;
 }
 
 export function vehiclePath(item: Pick<ReminderItem, "vehicleId">): string {
-  return `/garage/vehicles/${item.vehicleId}`;
+  return `/vehicles/${item.vehicleId}`;
 }
 
 /** Today's calendar date where the driver lives; an unknown zone falls back to UTC. */

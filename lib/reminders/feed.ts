@@ -36,7 +36,7 @@ export function buildFeed({
     prodId: { company: "Fourpatch", product: "Reminder feed", language: "EN" },
     // Serialised as REFRESH-INTERVAL;VALUE=DURATION:P1D (RFC 7986 §5.7) and X-PUBLISHED-TTL:P1D.
     ttl: 24 * 60 * 60,
-    url: `${baseUrl}/garage/reminders`,
+    url: `${baseUrl}/reminders`,
   });
   // Written by hand rather than through `timezone`: ical-generator would then
   // format all-day dates with the server's local clock. All-day DATE values

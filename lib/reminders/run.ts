@@ -108,7 +108,7 @@ function digestEmail({ to, name, userId, items }: { to: string; name: string; us
     unsubscribeUrl: oneClickUnsubscribeUrl({ userId, kind: "reminder-digest" }),
     react: ReminderDigestEmail({
       name: name.split(" ")[0] || name,
-      remindersUrl: `${base}/garage/reminders`,
+      remindersUrl: `${base}/reminders`,
       unsubscribeUrl: unsubscribeUrl({ userId, kind: "reminder-digest" }),
       caution: CAUTION,
       items: sorted.map((i) => ({

@@ -1,6 +1,6 @@
 // A driver's reminder settings: stored as JSON in driver_profile.reminder_settings
 // (jurisdiction and the e-mail switch have their own columns) and edited by
-// the form on /garage/reminders. The same schema parses both.
+// the form on /reminders. The same schema parses both.
 import { z } from "zod";
 import { JURISDICTIONS, type Jurisdiction, type ReminderKind } from "@/lib/tires";
 
@@ -91,7 +91,7 @@ function validTimeZone(tz: string): boolean {
   }
 }
 
-/** The settings form on /garage/reminders (server action and client form). */
+/** The settings form on /reminders (server action and client form). */
 export const reminderSettingsFormSchema = z
   .object({
     jurisdiction: z.enum(JURISDICTIONS as [Jurisdiction, ...Jurisdiction[]], { message: "Choose a region." }),

@@ -31,7 +31,7 @@ function expectedAutumnSwap(today: string): string {
 test.describe("a driver subscribes to calendar reminders", () => {
   test("feed link → calendar feed with the demo's dates → reminder e-mail with working links", async ({ page, context, request, browser }) => {
     await context.grantPermissions(["clipboard-read", "clipboard-write"]);
-    await new SessionPages(page).signInAndLand(ada.email, "/garage");
+    await new SessionPages(page).signInAndLand(ada.email, "/vehicles");
     const reminders = new RemindersPage(page);
     await reminders.open();
     await expect(page.getByText("local law", { exact: false }).first()).toBeVisible();
@@ -140,7 +140,7 @@ test.describe("a driver subscribes to calendar reminders", () => {
   });
 
   test("a Free driver sees the plan's limits and gets the basic feed without alarms", async ({ page, request }) => {
-    await new SessionPages(page).signInAndLand(demoAccounts.tomas.email, "/garage");
+    await new SessionPages(page).signInAndLand(demoAccounts.tomas.email, "/vehicles");
     const reminders = new RemindersPage(page);
     await reminders.open();
     await expect(page.getByRole("heading", { name: "Your plan: Free" })).toBeVisible();

@@ -9,7 +9,7 @@ test.describe("accounts and roles", () => {
     await expect(page.getByText("a qualified tire technician decide").first()).toBeVisible();
   });
 
-  test("a new driver signs up and lands in an empty garage", async ({ page }) => {
+  test("a new driver signs up and lands on an empty vehicles page", async ({ page }) => {
     await page.goto("/sign-up");
     await page.getByLabel("Your name").fill("Nell Brightwater");
     await page.getByLabel("E-mail").fill(`nell-${Date.now()}@example.test`);
@@ -18,13 +18,13 @@ test.describe("accounts and roles", () => {
     await expect(page.getByText("Use at least 10 characters.")).toBeVisible();
     await page.getByLabel("Password").fill("a-long-enough-password");
     await page.getByRole("button", { name: "Create my logbook" }).click();
-    await expect(page).toHaveURL(/\/garage$/);
-    await expect(page.getByRole("heading", { name: "Nell's garage" })).toBeVisible();
+    await expect(page).toHaveURL(/\/vehicles$/);
+    await expect(page.getByRole("heading", { name: "Nell's vehicles" })).toBeVisible();
   });
 
   for (const [who, home] of [
-    ["ada", "/garage"],
-    ["tomas", "/garage"],
+    ["ada", "/vehicles"],
+    ["tomas", "/vehicles"],
     ["wren", "/shop"],
     ["jo", "/shop"],
     ["ops", "/admin"],
@@ -41,7 +41,7 @@ test.describe("accounts and roles", () => {
   });
 
   test("signed out, every signed-in area redirects to sign-in", async ({ page }) => {
-    for (const path of ["/garage", "/shop", "/admin"]) {
+    for (const path of ["/vehicles", "/shop", "/admin"]) {
       await page.goto(path);
       await expect(page).toHaveURL(/\/sign-in\?next=/);
     }
@@ -49,7 +49,7 @@ test.describe("accounts and roles", () => {
 
   test("each area refuses the other roles, in the page and on direct requests", async ({ page, request }) => {
     const session = new SessionPages(page);
-    await session.signInAndLand(demoAccounts.tomas.email, "/garage");
+    await session.signInAndLand(demoAccounts.tomas.email, "/vehicles");
     for (const path of ["/shop", "/admin"]) {
       await page.goto(path);
       await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
@@ -60,7 +60,7 @@ test.describe("accounts and roles", () => {
     const html = await admin.text();
     expect(html).toContain("Not for this account");
     expect(html).not.toContain(demoAccounts.ops.email);
-    await page.goto("/garage");
+    await page.goto("/vehicles");
     await session.signOut();
 
     await session.signInAndLand(demoAccounts.jo.email, "/shop");
@@ -82,7 +82,7 @@ test.describe("accounts and roles", () => {
     await page.getByLabel("E-mail").fill(email);
     await page.getByLabel("Password").fill("the-first-password");
     await page.getByRole("button", { name: "Create my logbook" }).click();
-    await expect(page).toHaveURL(/\/garage$/);
+    await expect(page).toHaveURL(/\/vehicles$/);
     await new SessionPages(page).signOut();
 
     await page.goto("/forgot-password");
@@ -103,7 +103,7 @@ test.describe("accounts and roles", () => {
     const session = new SessionPages(page);
     await session.signIn(email, "the-first-password");
     await expect(page.getByText("That e-mail and password do not match an account.")).toBeVisible();
-    await session.signInAndLand(email, "/garage", "the-second-password");
+    await session.signInAndLand(email, "/vehicles", "the-second-password");
   });
 
   test("an operator disables an account, which can then no longer sign in", async ({ page }) => {
@@ -113,7 +113,7 @@ test.describe("accounts and roles", () => {
     await page.getByLabel("E-mail").fill(email);
     await page.getByLabel("Password").fill("quinns-password-1");
     await page.getByRole("button", { name: "Create my logbook" }).click();
-    await expect(page).toHaveURL(/\/garage$/);
+    await expect(page).toHaveURL(/\/vehicles$/);
     const session = new SessionPages(page);
     await session.signOut();
 

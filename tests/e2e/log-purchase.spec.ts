@@ -22,7 +22,7 @@ const RECEIPT = Buffer.from(
 async function logPurchase(page: Page, who: "tomas" | "ada", opts: { vehicle: RegExp; kind: "Winter" | "All-season"; size: string; load: string; fate: "stored" | "retired"; where?: string; screen: string; share?: boolean }) {
   const session = new SessionPages(page);
   const logbook = new LogbookPages(page);
-  await session.signInAndLand(demoAccounts[who].email, "/garage");
+  await session.signInAndLand(demoAccounts[who].email, "/vehicles");
   await logbook.openPurchase();
   await logbook.chooseVehicle(opts.vehicle);
   await logbook.chooseKind(opts.kind);
@@ -141,7 +141,7 @@ test.describe("a household driver logs a new tire purchase", () => {
 });
 
 test("the demo's set page shows the wear chart with the limit line and the inner-shoulder diagnosis", async ({ page }) => {
-  await new SessionPages(page).signInAndLand(demoAccounts.ada.email, "/garage");
+  await new SessionPages(page).signInAndLand(demoAccounts.ada.email, "/vehicles");
   await page.getByRole("link", { name: "Summer tires" }).first().click();
   await expect(page.getByRole("heading", { name: "Summer tires" })).toBeVisible();
   await expect(page.getByText("Worn on the inner shoulder.")).toBeVisible();
@@ -156,7 +156,7 @@ test("a new driver adds the vehicle inside the purchase flow; a wrong field keep
   await page.getByLabel("E-mail").fill(`bram-${Date.now()}@example.test`);
   await page.getByLabel("Password").fill("a-long-enough-password");
   await page.getByRole("button", { name: "Create my logbook" }).click();
-  await expect(page).toHaveURL(/\/garage$/);
+  await expect(page).toHaveURL(/\/vehicles$/);
   const logbook = new LogbookPages(page);
   await logbook.openPurchase();
   // With no vehicle yet, the form asks for one in place.

@@ -18,7 +18,7 @@ test("a driver shares a logbook with a shop, the technician adds to it, and the 
   // --- The driver gives the pass.
   const driverCtx = await browser.newContext({ viewport: { width: 390, height: 844 } });
   const driver = await driverCtx.newPage();
-  await new SessionPages(driver).signInAndLand(demoAccounts.ada.email, "/garage");
+  await new SessionPages(driver).signInAndLand(demoAccounts.ada.email, "/vehicles");
   const vehicleId = await DriverPassesPage.makeVehicle(driver.request, nickname);
   const passes = new DriverPassesPage(driver);
   await passes.open();
@@ -61,7 +61,7 @@ test("a driver shares a logbook with a shop, the technician adds to it, and the 
   await tech.goBack();
 
   // --- The driver sees the work, the access log and the e-mail.
-  await driver.goto(`/garage/vehicles/${vehicleId}`);
+  await driver.goto(`/vehicles/${vehicleId}`);
   await expect(driver.getByText("Rotated front to back; front left wears on its inner shoulder.").first()).toBeVisible();
   await passes.open();
   const log = passes.accessLogFor(nickname);
@@ -120,7 +120,7 @@ test("the owner invites a technician, who joins once through the e-mailed link, 
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill("a-long-enough-password");
   await page.getByRole("button", { name: "Create my logbook" }).click();
-  await expect(page).toHaveURL(/\/garage$/);
+  await expect(page).toHaveURL(/\/vehicles$/);
   await page.goto(path);
   await page.getByRole("button", { name: "Join Quillby Tread Works" }).click();
   await expect(page).toHaveURL(/\/shop$/);
@@ -135,8 +135,8 @@ test("the owner invites a technician, who joins once through the e-mailed link, 
   await page.getByRole("button", { name: "Remove Perrin" }).click();
   await expect(page.getByText("Perrin Dunmore is no longer on the staff.")).toBeVisible();
   await session.signOut();
-  // No shop any more: the account lands in its own garage, and the workspace is closed to it.
-  await session.signInAndLand(email, "/garage", "a-long-enough-password");
+  // No shop any more: the account lands on its own vehicles page, and the workspace is closed to it.
+  await session.signInAndLand(email, "/vehicles", "a-long-enough-password");
   await page.goto("/shop");
   await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
 });

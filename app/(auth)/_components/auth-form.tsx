@@ -106,7 +106,7 @@ export function SignUpForm() {
           );
           return;
         }
-        router.push("/garage");
+        router.push("/vehicles");
         router.refresh();
       })}
     >

@@ -14,10 +14,10 @@ export default async function OpenShopPage() {
   return (
     <AppShell
       areaLabel="New shop"
-      homeHref="/garage"
+      homeHref="/vehicles"
       userName={session.user.name}
       nav={[
-        { href: "/garage", label: "Garage", exact: true },
+        { href: "/vehicles", label: "Vehicles", exact: true },
         { href: "/open-a-shop", label: "Open a shop" },
       ]}
     >

@@ -9,7 +9,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
   const session = await getSession();
   if (!session) redirect("/sign-in?next=/shop");
   const shops = await membershipsOf({ userId: session.user.id });
-  if (shops.length === 0) return <NotForThisAccount area="shop workspace" home="/garage" />;
+  if (shops.length === 0) return <NotForThisAccount area="shop workspace" home="/vehicles" />;
   const owner = shops.some((s) => s.role === "owner");
   return (
     <AppShell
@@ -19,7 +19,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
       nav={[
         { href: "/shop", label: "Passes", exact: true },
         ...(owner ? [{ href: "/shop/profile", label: "Shop & staff" }] : []),
-        { href: "/garage", label: "My own garage" },
+        { href: "/vehicles", label: "My own vehicles" },
       ]}
     >
       {children}

@@ -1,10 +1,10 @@
-// The signed-in driver's garage: list (with conditions and next reminders) and add a vehicle.
+// The signed-in driver's vehicles: list (with conditions and next reminders) and add a vehicle.
 import { created, parseJson, route } from "@/lib/api/handler";
-import { listGarage } from "@/db/queries/logbook";
+import { listVehicleSummaries } from "@/db/queries/logbook";
 import { createVehicle } from "@/db/queries/vehicles";
 import { todayIso, vehicleSchema } from "@/lib/validation/logbook";
 
-export const GET = route(async ({ session }) => listGarage({ userId: session!.user.id, today: todayIso() }));
+export const GET = route(async ({ session }) => listVehicleSummaries({ userId: session!.user.id, today: todayIso() }));
 
 export const POST = route(async ({ req, session }) => {
   const input = await parseJson(req, vehicleSchema);

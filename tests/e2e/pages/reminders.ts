@@ -2,12 +2,12 @@ import { expect, type Page } from "@playwright/test";
 
 export type PageReminder = { id: string; kind: string; date: string; subject: string };
 
-/** Page object for /garage/reminders: the coming items and the calendar feed. */
+/** Page object for /reminders: the coming items and the calendar feed. */
 export class RemindersPage {
   constructor(private readonly page: Page) {}
 
   async open() {
-    await this.page.goto("/garage/reminders");
+    await this.page.goto("/reminders");
     await expect(this.page.getByRole("heading", { level: 1, name: "Reminders" })).toBeVisible();
   }
 

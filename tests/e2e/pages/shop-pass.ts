@@ -23,7 +23,7 @@ export class DriverPassesPage {
   }
 
   async open() {
-    await this.page.goto("/garage/passes");
+    await this.page.goto("/passes");
     await expect(this.page.getByRole("heading", { name: "Shop passes", level: 1 })).toBeVisible();
   }
 

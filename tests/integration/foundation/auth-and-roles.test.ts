@@ -42,7 +42,7 @@ describe("sessions and homes", () => {
       const res = await start(request("/start", { as }));
       return new URL(res.headers.get("location")!).pathname;
     };
-    expect(await home(driver)).toBe("/garage");
+    expect(await home(driver)).toBe("/vehicles");
     expect(await home(owner)).toBe("/shop");
     expect(await home(tech)).toBe("/shop");
     expect(await home(admin)).toBe("/admin");

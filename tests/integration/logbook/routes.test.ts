@@ -54,7 +54,7 @@ describe("vehicles", () => {
     expect(row.placardFrontKpa).toBeCloseTo(227.53, 1);
   });
 
-  it("the garage lists only the driver's own vehicles", async () => {
+  it("the vehicles list holds only the driver's own vehicles", async () => {
     const ada = await signUp();
     const tomas = await signUp();
     const mine = await makeVehicle(ada, { nickname: "Ada's" });

@@ -3,7 +3,7 @@
 import { describe, expect, it } from "vitest";
 import { seedDemo } from "@/db/seed";
 import { DEMO_VEHICLES, demoVehicleId } from "@/db/seed/logbook";
-import { getVehicleLogbook, listGarage } from "@/db/queries/logbook";
+import { getVehicleLogbook, listVehicleSummaries } from "@/db/queries/logbook";
 import { todayIso } from "@/lib/validation/logbook";
 
 describe("demo logbook", () => {
@@ -39,19 +39,19 @@ describe("demo logbook", () => {
     expect(book.attachments.map((a) => a.mimeType)).toEqual(["application/pdf"]);
   });
 
-  it("the garage shows a next reminder and a condition for each of Ada's vehicles, and loading twice adds nothing", async () => {
+  it("the vehicles overview shows a next reminder and a condition for each of Ada's vehicles, and loading twice adds nothing", async () => {
     const today = todayIso();
     const { ids } = await seedDemo({ today });
-    const garage = await listGarage({ userId: ids.ada, today });
-    expect(garage.vehicles.map((v) => v.nickname)).toEqual([DEMO_VEHICLES.adaCar, DEMO_VEHICLES.adaVan]);
-    for (const v of garage.vehicles) {
+    const overview = await listVehicleSummaries({ userId: ids.ada, today });
+    expect(overview.vehicles.map((v) => v.nickname)).toEqual([DEMO_VEHICLES.adaCar, DEMO_VEHICLES.adaVan]);
+    for (const v of overview.vehicles) {
       expect(v.mountedSet?.condition).toBeTruthy();
       expect(v.nextReminder?.date).toMatch(/^\d{4}-\d{2}-\d{2}$/);
       expect(v.lastCheck).not.toBeNull();
     }
     // The van's all-season set is past 5 years: "watch" by age [practice, trade-facts §3].
-    expect(garage.vehicles[1].mountedSet?.condition).toBe("watch");
-    const tomas = await listGarage({ userId: ids.tomas, today });
+    expect(overview.vehicles[1].mountedSet?.condition).toBe("watch");
+    const tomas = await listVehicleSummaries({ userId: ids.tomas, today });
     expect(tomas.vehicles).toHaveLength(1);
   });
 });

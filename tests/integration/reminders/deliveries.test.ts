@@ -67,7 +67,7 @@ describe("reminder e-mail run", () => {
     expect(mail.text).toContain("Frostvale winter on Blue estate");
     expect(mail.text).toContain("rotation due at 30,000 km");
     expect(mail.text).toContain(CAUTION);
-    expect(mail.html).toMatch(/href="http:\/\/fourpatch\.test\/garage\/sets\/[0-9a-f-]{36}"/);
+    expect(mail.html).toMatch(/href="http:\/\/fourpatch\.test\/sets\/[0-9a-f-]{36}"/);
     expect(mail.html).toMatch(/href="http:\/\/fourpatch\.test\/unsubscribe\/[^"]+"/);
     expect(mail.headers?.["List-Unsubscribe"]).toMatch(/^<http:\/\/fourpatch\.test\/unsubscribe\/[^>]+\/one-click>$/);
     expect(mail.headers?.["List-Unsubscribe-Post"]).toBe("List-Unsubscribe=One-Click");

@@ -127,9 +127,9 @@ describe("reminder feed for a known logbook (Plus driver)", () => {
       const description = String(e.getFirstPropertyValue("description"));
       expect(description).toContain("What to do:");
       expect(description).toContain(CAUTION);
-      expect(description).toMatch(/http:\/\/fourpatch\.test\/garage\/sets\/[0-9a-f-]{36}/);
-      expect(description).toContain(`http://fourpatch.test/garage/vehicles/${ids.vehicleId}`);
-      expect(String(e.getFirstPropertyValue("url"))).toMatch(/^http:\/\/fourpatch\.test\/garage\/sets\//);
+      expect(description).toMatch(/http:\/\/fourpatch\.test\/sets\/[0-9a-f-]{36}/);
+      expect(description).toContain(`http://fourpatch.test/vehicles/${ids.vehicleId}`);
+      expect(String(e.getFirstPropertyValue("url"))).toMatch(/^http:\/\/fourpatch\.test\/sets\//);
     }
   });
 

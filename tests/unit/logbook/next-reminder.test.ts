@@ -13,7 +13,7 @@ const item = (id: string, date: string, severity: ReminderItem["severity"], over
   explanation: "",
 });
 
-describe("the one reminder a garage card shows", () => {
+describe("the one reminder a vehicle card shows", () => {
   const today = "2026-12-01";
   it("puts an overdue replace first", () => {
     const items = [item("watch-old", "2025-03-28", "watch", true), item("replace", "2026-01-10", "replace", true), item("soon", "2026-12-20", "info", false)];

@@ -7,29 +7,29 @@ import { Card } from "@/components/ui/card";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
-import { listGarage } from "@/db/queries/logbook";
+import { listVehicleSummaries } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
 import { distanceUnitFor, formatDistance } from "@/lib/units";
 import { todayIso } from "@/lib/validation/logbook";
 
 export const dynamic = "force-dynamic";
 
-export default async function GaragePage() {
+export default async function VehiclesOverviewPage() {
   const session = await getSession();
-  if (!session) redirect("/sign-in?next=/garage");
-  const { vehicles, prefs } = await listGarage({ userId: session.user.id, today: todayIso() });
+  if (!session) redirect("/sign-in?next=/vehicles");
+  const { vehicles, prefs } = await listVehicleSummaries({ userId: session.user.id, today: todayIso() });
   const unit = distanceUnitFor(prefs.units);
   return (
     <>
       <PageHeader
-        title={`${session.user.name.split(" ")[0] ?? "Your"}'s garage`}
+        title={`${session.user.name.split(" ")[0] ?? "Your"}'s vehicles`}
         description="Your vehicles, the tires on them and the ones in storage."
         actions={
           <>
-            <Link href="/garage/log-purchase" className={buttonVariants()}>
+            <Link href="/log-purchase" className={buttonVariants()}>
               Log a tire purchase
             </Link>
-            <Link href="/garage/vehicles/new" className={buttonVariants({ variant: "secondary" })}>
+            <Link href="/vehicles/new" className={buttonVariants({ variant: "secondary" })}>
               <Plus aria-hidden className="size-4" /> Add a vehicle
             </Link>
           </>
@@ -47,7 +47,7 @@ export default async function GaragePage() {
                 <div className="flex items-start justify-between gap-2">
                   <div>
                     <h2 className="text-lg font-bold">
-                      <Link href={`/garage/vehicles/${v.id}`} className="text-asphalt-950 underline-offset-4 hover:underline">
+                      <Link href={`/vehicles/${v.id}`} className="text-asphalt-950 underline-offset-4 hover:underline">
                         {v.nickname}
                       </Link>
                     </h2>
@@ -65,7 +65,7 @@ export default async function GaragePage() {
                     <dd>
                       {v.mountedSet ? (
                         <>
-                          On the car: <Link href={`/garage/sets/${v.mountedSet.id}`} className={linkClass}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
+                          On the car: <Link href={`/sets/${v.mountedSet.id}`} className={linkClass}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
                         </>
                       ) : (
                         <>No set on the car in the logbook.</>
@@ -106,7 +106,7 @@ export default async function GaragePage() {
                       <Warehouse aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
                       <dd className="flex flex-wrap items-center gap-2">
                         <span>
-                          Stored: <Link href={`/garage/sets/${s.id}`} className={linkClass}>{setTitle(s)}</Link>
+                          Stored: <Link href={`/sets/${s.id}`} className={linkClass}>{setTitle(s)}</Link>
                           {s.storageLocation ? ` at ${s.storageLocation}` : ""}
                         </span>
                         {s.condition ? <ConditionBadge condition={s.condition} className="text-xs" /> : null}
@@ -115,10 +115,10 @@ export default async function GaragePage() {
                   ))}
                 </dl>
                 <div className="flex flex-wrap gap-2 pt-1">
-                  <Link href={`/garage/vehicles/${v.id}/check`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
+                  <Link href={`/vehicles/${v.id}/check`} className={buttonVariants({ variant: "secondary", size: "sm" })}>
                     Record a tread check
                   </Link>
-                  <Link href={`/garage/vehicles/${v.id}`} className={buttonVariants({ variant: "ghost", size: "sm" })}>
+                  <Link href={`/vehicles/${v.id}`} className={buttonVariants({ variant: "ghost", size: "sm" })}>
                     Open the logbook
                   </Link>
                 </div>

@@ -1,9 +1,9 @@
 "use client";
-// One TanStack Query client per browser tab for the garage's pages.
+// One TanStack Query client per browser tab for the driver's pages.
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useState, type ReactNode } from "react";
 
-export function GarageProviders({ children }: { children: ReactNode }) {
+export function DriverProviders({ children }: { children: ReactNode }) {
   const [client] = useState(
     () =>
       new QueryClient({

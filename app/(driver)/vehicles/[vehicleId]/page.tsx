@@ -11,7 +11,7 @@ export const dynamic = "force-dynamic";
 export default async function VehiclePage({ params, searchParams }: { params: Promise<{ vehicleId: string }>; searchParams: Promise<{ saved?: string }> }) {
   const session = await getSession();
   const { vehicleId } = await params;
-  if (!session) redirect(`/sign-in?next=/garage/vehicles/${vehicleId}`);
+  if (!session) redirect(`/sign-in?next=/vehicles/${vehicleId}`);
   const { saved } = await searchParams;
   const book = await getVehicleLogbook({ access: ownerAccess(session), vehicleId, today: todayIso() }).catch(orNotFound);
   return <VehicleLogbookView initial={book} saved={saved} />;

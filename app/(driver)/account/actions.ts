@@ -6,6 +6,6 @@ import { unitsSchema } from "@/lib/validation/logbook";
 
 export const saveUnits = action(unitsSchema, {}, async (input, { session }) => {
   const r = await setUnits({ userId: session.user.id, ...input });
-  revalidatePath("/garage", "layout");
+  revalidatePath("/vehicles", "layout");
   return r;
 });

@@ -11,7 +11,7 @@ export const dynamic = "force-dynamic";
 export default async function SetPage({ params, searchParams }: { params: Promise<{ setId: string }>; searchParams: Promise<{ saved?: string }> }) {
   const session = await getSession();
   const { setId } = await params;
-  if (!session) redirect(`/sign-in?next=/garage/sets/${setId}`);
+  if (!session) redirect(`/sign-in?next=/sets/${setId}`);
   const { saved } = await searchParams;
   const detail = await getSetDetail({ access: ownerAccess(session), setId, today: todayIso() }).catch(orNotFound);
   return <SetDetailView initial={detail} saved={saved} />;

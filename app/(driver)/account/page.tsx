@@ -11,7 +11,7 @@ export const dynamic = "force-dynamic";
 
 export default async function AccountPage() {
   const session = await getSession();
-  if (!session) redirect("/sign-in?next=/garage/account");
+  if (!session) redirect("/sign-in?next=/account");
   const prefs = await driverPrefs({ userId: session.user.id });
   return (
     <div className="mx-auto max-w-3xl space-y-4">

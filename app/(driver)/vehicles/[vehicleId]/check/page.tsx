@@ -13,7 +13,7 @@ export const dynamic = "force-dynamic";
 export default async function CheckPage({ params, searchParams }: { params: Promise<{ vehicleId: string }>; searchParams: Promise<{ set?: string }> }) {
   const session = await getSession();
   const { vehicleId } = await params;
-  if (!session) redirect(`/sign-in?next=/garage/vehicles/${vehicleId}/check`);
+  if (!session) redirect(`/sign-in?next=/vehicles/${vehicleId}/check`);
   const { set } = await searchParams;
   const book = await getVehicleLogbook({ access: ownerAccess(session), vehicleId, today: todayIso() }).catch(orNotFound);
   const sets = book.sets

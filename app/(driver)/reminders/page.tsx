@@ -23,10 +23,10 @@ function timeZones(current: string): string[] {
 
 export default async function RemindersPage() {
   const session = await getSession();
-  if (!session) redirect("/sign-in?next=/garage/reminders");
+  if (!session) redirect("/sign-in?next=/reminders");
   const userId = session.user.id;
   const profile = await reminderProfile({ userId });
-  if (!profile) redirect("/garage");
+  if (!profile) redirect("/vehicles");
   // The driver's own date decides what is overdue.
   const today = todayIn(profile.timezone, new Date());
   const [{ items, skipped, error }, feed] = await Promise.all([computeFor({ profile, today }), activeFeedOf({ userId })]);

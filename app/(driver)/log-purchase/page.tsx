@@ -8,7 +8,7 @@ export const dynamic = "force-dynamic";
 
 export default async function LogPurchasePage({ searchParams }: { searchParams: Promise<{ vehicle?: string }> }) {
   const session = await getSession();
-  if (!session) redirect("/sign-in?next=/garage/log-purchase");
+  if (!session) redirect("/sign-in?next=/log-purchase");
   const [vehicles, prefs, { vehicle }] = await Promise.all([listVehicleChoices({ userId: session.user.id }), driverPrefs({ userId: session.user.id }), searchParams]);
   return (
     <div className="mx-auto max-w-3xl">

@@ -23,12 +23,12 @@ export const createFeedLink = action(z.object({}), {}, async (_input, { session 
 
 export const turnOffFeed = action(z.object({}), {}, async (_input, { session }) => {
   await revokeFeed({ userId: session.user.id });
-  revalidatePath("/garage/reminders");
+  revalidatePath("/reminders");
   return null;
 });
 
 export const saveReminderSettingsAction = action(reminderSettingsFormSchema, {}, async (input, { session }) => {
   const saved = await saveSettingsFor({ userId: session.user.id, input });
-  revalidatePath("/garage/reminders");
+  revalidatePath("/reminders");
   return { emailActive: saved.emailActive };
 });

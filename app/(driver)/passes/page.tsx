@@ -40,7 +40,7 @@ export default async function DriverPassesPage() {
           {vehicles.length === 0 ? (
             <div className="space-y-3">
               <p className="text-asphalt-700">A pass opens a vehicle&apos;s logbook. Add a vehicle first.</p>
-              <Link href="/garage/vehicles/new" className={buttonVariants({ variant: "secondary" })}>
+              <Link href="/vehicles/new" className={buttonVariants({ variant: "secondary" })}>
                 Add a vehicle
               </Link>
             </div>

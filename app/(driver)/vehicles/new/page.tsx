@@ -8,7 +8,7 @@ export const dynamic = "force-dynamic";
 
 export default async function NewVehiclePage({ searchParams }: { searchParams: Promise<{ then?: string }> }) {
   const session = await getSession();
-  if (!session) redirect("/sign-in?next=/garage/vehicles/new");
+  if (!session) redirect("/sign-in?next=/vehicles/new");
   const [prefs, { then }] = await Promise.all([driverPrefs({ userId: session.user.id }), searchParams]);
   return (
     <div className="mx-auto max-w-3xl">
