@@ -1,9 +1,21 @@
-// Runs once when the server starts: apply migrations before any request.
+// Runs once when the server starts: refuse an unsafe configuration, stamp
+// requests with their peer address, apply migrations before any request.
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
   if (process.env.NEXT_PHASE === "phase-production-build") return;
-  const { migrateDb } = await import("./db");
-  await migrateDb();
+  const { installPeerStamp } = await import("./lib/peer");
+  installPeerStamp();
+  try {
+    const { assertFakesConfigured } = await import("./lib/dev-fakes");
+    assertFakesConfigured([{ name: "e-mail", realKeyVar: "RESEND_API_KEY" }]);
+    const { migrateDb } = await import("./db");
+    await migrateDb();
+  } catch (err) {
+    // A server that cannot serve safely (a fake left reachable, a data folder
+    // held by another process) stops with the reason instead of answering 500s.
+    console.error(`\n${err instanceof Error ? err.message : String(err)}\n`);
+    process.exit(1);
+  }
   const { startScheduler } = await import("./lib/scheduler");
   startScheduler();
 }

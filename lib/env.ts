@@ -44,9 +44,14 @@ export function appUrl(): string {
   return (e.BETTER_AUTH_URL ?? `http://localhost:${process.env.PORT ?? 3000}`).replace(/\/$/, "");
 }
 
-/** True while the local fakes stand in for e-mail. */
+/** True while the local fake stands in for e-mail: no real key, and fakes switched on explicitly (lib/dev-fakes.ts). */
 export function usingFakeEmail(): boolean {
-  return !env().RESEND_API_KEY;
+  return !env().RESEND_API_KEY && process.env.FOURPATCH_DEV_FAKES === "on";
+}
+
+/** Neither a real e-mail key nor the fakes: nothing is sent (a production server refuses to start). */
+export function emailDisabled(): boolean {
+  return !env().RESEND_API_KEY && process.env.FOURPATCH_DEV_FAKES !== "on";
 }
 
 export function usingFakeStripe(): boolean {

@@ -13,6 +13,9 @@ import { ATTACHMENT_MAX_BYTES, ATTACHMENT_TYPES } from "@/lib/validation/logbook
 
 export type AllowedType = (typeof ATTACHMENT_TYPES)[number];
 
+/** Each driver's files together, counted over all of their vehicles. FOURPATCH_STORAGE_QUOTA_MB overrides. */
+export const STORAGE_QUOTA_BYTES = Math.max(1, Number(process.env.FOURPATCH_STORAGE_QUOTA_MB) || 500) * 1024 * 1024;
+
 export function uploadsDir(): string {
   const dataDir = process.env.NEXT_PHASE === "phase-production-build" ? "memory://" : env().FOURPATCH_DATA_DIR;
   // An in-memory database (tests) keeps its files in a temporary folder of this process.

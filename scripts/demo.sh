@@ -7,6 +7,8 @@ cd "$(dirname "$0")/.."
 export PORT="${PORT:-3000}"
 export BETTER_AUTH_URL="${BETTER_AUTH_URL:-http://localhost:$PORT}"
 export FOURPATCH_DATA_DIR="${FOURPATCH_DATA_DIR:-./data}"
+# The local e-mail outbox (and other fakes) for this local trial; loopback clients only.
+export FOURPATCH_DEV_FAKES="${FOURPATCH_DEV_FAKES:-on}"
 
 # A local secret, made once and kept out of git, so sessions survive restarts.
 if [ -z "${BETTER_AUTH_SECRET:-}" ]; then

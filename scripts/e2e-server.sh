@@ -13,6 +13,7 @@ export FOURPATCH_SCHEDULER="off"
 # One browser signs in dozens of times a minute from one address; the limit itself is covered by an integration test.
 export FOURPATCH_AUTH_RATE_LIMIT="off"
 export CRON_SECRET="e2e-cron-secret"
+export FOURPATCH_DEV_FAKES="on"
 unset DATABASE_URL RESEND_API_KEY STRIPE_SECRET_KEY
 
 rm -rf "$FOURPATCH_DATA_DIR"

@@ -6,7 +6,7 @@ import "server-only";
 // every read and write under a pass lands in the vehicle's access log.
 import { and, eq } from "drizzle-orm";
 import { db, type Transaction } from "@/db";
-import { accessLog, vehicle } from "@/db/schema";
+import { accessLog, member, shopPass, shopPassVehicle, vehicle } from "@/db/schema";
 import { canWrite, type LogbookAccess } from "@/lib/auth/logbook-access";
 import { AppError, notFound } from "@/lib/errors";
 
@@ -24,9 +24,38 @@ export async function assertVehicleAccess(access: LogbookAccess, check: VehicleC
     return;
   }
   if (!access.vehicleIds.includes(check.vehicleId)) throw notFound("That vehicle");
-  if ((check.now ?? new Date()) >= access.endsAt) {
+  const now = check.now ?? new Date();
+  if (now >= access.endsAt) {
     throw new AppError("pass_ended", "The driver's pass for this vehicle has ended. Ask the driver for a new pass.");
   }
+  // The pass was resolved before the request body was read; a slow body can
+  // outlive a withdrawal or a staff removal. So the pass, the membership and
+  // the vehicle are read again here, inside the write's transaction, with the
+  // pass row locked against a concurrent revoke until the write commits.
+  const [pass] = await tx
+    .select({ shopId: shopPass.shopId, startsAt: shopPass.startsAt, endsAt: shopPass.endsAt, revokedAt: shopPass.revokedAt })
+    .from(shopPass)
+    .where(eq(shopPass.id, access.passId))
+    .limit(1)
+    .for("share");
+  if (!pass || pass.shopId !== access.shopId) throw notFound("That pass");
+  if (pass.revokedAt && pass.revokedAt <= now) {
+    throw new AppError("pass_ended", "The driver withdrew this pass, so the logbook is closed to the shop. Entries already saved stay in the driver's logbook.");
+  }
+  if (now >= pass.endsAt) throw new AppError("pass_ended", "The driver's pass for this vehicle has ended. Ask the driver for a new pass.");
+  if (now < pass.startsAt) throw new AppError("forbidden", "This pass has not started yet.");
+  const [stillMember] = await tx
+    .select({ id: member.id })
+    .from(member)
+    .where(and(eq(member.organizationId, access.shopId), eq(member.userId, access.userId)))
+    .limit(1);
+  if (!stillMember) throw notFound("That pass");
+  const [covered] = await tx
+    .select({ id: shopPassVehicle.vehicleId })
+    .from(shopPassVehicle)
+    .where(and(eq(shopPassVehicle.passId, access.passId), eq(shopPassVehicle.vehicleId, check.vehicleId)))
+    .limit(1);
+  if (!covered) throw notFound("That vehicle");
   if (check.write && !canWrite(access)) {
     throw new AppError("forbidden", "This pass lets the shop read the logbook, not add to it.");
   }
@@ -34,6 +63,7 @@ export async function assertVehicleAccess(access: LogbookAccess, check: VehicleC
     passId: access.passId,
     vehicleId: check.vehicleId,
     shopId: access.shopId,
+    shopName: access.shopName,
     actorUserId: access.userId,
     actorName: access.userName,
     action: check.action,

@@ -1,12 +1,12 @@
 import "server-only";
 // Receipts and photos: checked by content, stored under random names, and
 // only ever read back through the vehicle's access check.
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { attachment, serviceEntry, tireSet, vehicle } from "@/db/schema";
 import type { LogbookAccess } from "@/lib/auth/logbook-access";
 import { AppError, notFound } from "@/lib/errors";
-import { checkUpload, displayFileName, readStoredFile, removeStoredFile, storeFile } from "@/lib/uploads";
+import { checkUpload, displayFileName, readStoredFile, removeStoredFile, STORAGE_QUOTA_BYTES, storeFile } from "@/lib/uploads";
 import { assertVehicleAccess } from "./access";
 import { requireOwner } from "./logbook-writes";
 
@@ -40,6 +40,18 @@ export async function saveAttachment({
         if (!s) throw new AppError("invalid", "That entry is not in this vehicle's logbook.", { serviceEntryId: ["Choose an entry of this vehicle."] });
       }
       const [owner] = await tx.select({ ownerId: vehicle.ownerId }).from(vehicle).where(eq(vehicle.id, vehicleId)).limit(1);
+      // The driver's storage quota, counted inside the write so two uploads at once cannot both slip under it.
+      const [used] = await tx
+        .select({ bytes: sql<string>`coalesce(sum(${attachment.sizeBytes}), 0)` })
+        .from(attachment)
+        .where(eq(attachment.ownerId, owner.ownerId));
+      if (Number(used.bytes) + file.bytes.byteLength > STORAGE_QUOTA_BYTES) {
+        throw new AppError(
+          "too_large",
+          `This logbook's files would pass the ${STORAGE_QUOTA_BYTES / (1024 * 1024)} MB storage limit. Delete old photos or receipts first.`,
+          { file: ["Storage limit reached."] },
+        );
+      }
       const [row] = await tx
         .insert(attachment)
         .values({

@@ -1,7 +1,7 @@
 import "server-only";
 // Reading a driver's logbook: the vehicles overview, one vehicle's whole
 // logbook, one set. Every read goes through assertVehicleAccess first.
-import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Transaction } from "@/db";
 import {
   accessLog,
@@ -210,9 +210,9 @@ export async function getVehicleLogbook({
   const log =
     access.kind === "owner"
       ? await db
-          .select({ id: accessLog.id, at: accessLog.at, actorName: accessLog.actorName, action: accessLog.action, detail: accessLog.detail, shopName: organization.name })
+          .select({ id: accessLog.id, at: accessLog.at, actorName: accessLog.actorName, action: accessLog.action, detail: accessLog.detail, shopName: sql<string>`coalesce(${organization.name}, ${accessLog.shopName}, 'A closed shop')` })
           .from(accessLog)
-          .innerJoin(organization, eq(accessLog.shopId, organization.id))
+          .leftJoin(organization, eq(accessLog.shopId, organization.id))
           .where(eq(accessLog.vehicleId, vehicleId))
           .orderBy(desc(accessLog.at))
           .limit(200)

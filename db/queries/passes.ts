@@ -70,8 +70,9 @@ export async function resolvePassAccess({ session, passId, now }: { session: Ses
     .innerJoin(organization, eq(organization.id, shopPass.shopId))
     .where(eq(shopPass.id, passId))
     .limit(1);
-  if (!row) throw notFound("That pass");
-  const membership = await membershipIn({ userId: s.user.id, shopId: row.pass.shopId });
+  if (!row || !row.pass.shopId) throw notFound("That pass");
+  const shopId = row.pass.shopId;
+  const membership = await membershipIn({ userId: s.user.id, shopId });
   if (!membership) throw notFound("That pass");
   const state = passState(row.pass, now);
   if (state === "revoked") {
@@ -87,7 +88,7 @@ export async function resolvePassAccess({ session, passId, now }: { session: Ses
     userId: s.user.id,
     userName: s.user.name,
     passId,
-    shopId: row.pass.shopId,
+    shopId,
     shopName: row.shopName,
     scope: row.pass.scope,
     vehicleIds: vehicles.map((v) => v.id),
@@ -139,7 +140,7 @@ export async function listShopPasses({ session, shopId, now }: { session: Sessio
     const state = passState(pass, now);
     return {
       id: pass.id,
-      shopId: pass.shopId,
+      shopId: pass.shopId ?? "",
       shopName,
       driverName,
       scope: pass.scope,
@@ -223,7 +224,7 @@ export async function issuePass({ session, input, now }: IssuePassArgs) {
   const pass = await db.transaction(async (tx) => {
     const [p] = await tx
       .insert(shopPass)
-      .values({ driverId: s.user.id, shopId: shop.id, scope: input.scope, startsAt: now, endsAt, note: input.note ?? null })
+      .values({ driverId: s.user.id, shopId: shop.id, shopName: shop.name, scope: input.scope, startsAt: now, endsAt, note: input.note ?? null })
       .returning();
     await tx.insert(shopPassVehicle).values(vehicles.map((v) => ({ passId: p.id, vehicleId: v.id })));
     return p;
@@ -319,9 +320,14 @@ export type DriverPassRow = {
 export async function listDriverPasses({ session, now }: { session: Session | null; now: Date }): Promise<DriverPassRow[]> {
   const s = requireSession(session);
   const rows = await db
-    .select({ pass: shopPass, shopName: organization.name, shopTown: sql<string | null>`(select town from shop_profile where shop_id = ${shopPass.shopId})` })
+    .select({
+      pass: shopPass,
+      // A shop that has closed keeps its name on the driver's rows.
+      shopName: sql<string>`coalesce(${organization.name}, ${shopPass.shopName}, 'A closed shop')`,
+      shopTown: sql<string | null>`(select town from shop_profile where shop_id = ${shopPass.shopId})`,
+    })
     .from(shopPass)
-    .innerJoin(organization, eq(organization.id, shopPass.shopId))
+    .leftJoin(organization, eq(organization.id, shopPass.shopId))
     .where(eq(shopPass.driverId, s.user.id))
     .orderBy(desc(shopPass.createdAt))
     .limit(200);
@@ -330,7 +336,7 @@ export async function listDriverPasses({ session, now }: { session: Session | nu
     const state = passState(pass, now);
     return {
       id: pass.id,
-      shopId: pass.shopId,
+      shopId: pass.shopId ?? "",
       shopName,
       shopTown,
       scope: pass.scope,
@@ -370,14 +376,14 @@ export async function listAccessLog({ access, vehicleId, limit = 200 }: { access
       action: accessLog.action,
       detail: accessLog.detail,
       actorName: accessLog.actorName,
-      shopName: organization.name,
+      shopName: sql<string>`coalesce(${organization.name}, ${accessLog.shopName}, 'A closed shop')`,
       passId: accessLog.passId,
       vehicleId: accessLog.vehicleId,
       vehicleNickname: vehicle.nickname,
     })
     .from(accessLog)
     .innerJoin(vehicle, eq(vehicle.id, accessLog.vehicleId))
-    .innerJoin(organization, eq(organization.id, accessLog.shopId))
+    .leftJoin(organization, eq(organization.id, accessLog.shopId))
     .where(and(eq(vehicle.ownerId, access.userId), vehicleId ? eq(accessLog.vehicleId, vehicleId) : undefined))
     .orderBy(desc(accessLog.at))
     .limit(limit);

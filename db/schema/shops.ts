@@ -31,9 +31,10 @@ export const shopPass = pgTable(
     driverId: text("driver_id")
       .notNull()
       .references(() => user.id, { onDelete: "cascade" }),
-    shopId: text("shop_id")
-      .notNull()
-      .references(() => organization.id, { onDelete: "cascade" }),
+    // A shop that closes leaves the driver's pass history in place (no
+    // cascade): the id is cleared and the name kept on the row.
+    shopId: text("shop_id").references(() => organization.id, { onDelete: "set null" }),
+    shopName: text("shop_name"),
     scope: passScope("scope").notNull(),
     startsAt: tz("starts_at").notNull(),
     endsAt: tz("ends_at").notNull(),
@@ -73,9 +74,9 @@ export const accessLog = pgTable(
     vehicleId: uuid("vehicle_id")
       .notNull()
       .references(() => vehicle.id, { onDelete: "cascade" }),
-    shopId: text("shop_id")
-      .notNull()
-      .references(() => organization.id, { onDelete: "cascade" }),
+    // The driver's access log outlives the shop, with the shop's name.
+    shopId: text("shop_id").references(() => organization.id, { onDelete: "set null" }),
+    shopName: text("shop_name"),
     actorUserId: text("actor_user_id").references(() => user.id, { onDelete: "set null" }),
     actorName: text("actor_name").notNull(),
     action: text("action").notNull(),

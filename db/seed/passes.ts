@@ -5,7 +5,7 @@
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { accessLog, serviceEntry, shopPass, shopPassVehicle, vehicle } from "@/db/schema";
-import { demoAccounts } from "./demo-accounts";
+import { DEMO_SHOP, demoAccounts } from "./demo-accounts";
 import type { SeedContext } from "../seed";
 
 const HOUR = 60 * 60 * 1000;
@@ -31,7 +31,7 @@ export async function seedPasses(ctx: SeedContext): Promise<{ active?: string; e
       .insert(shopPass)
       .values({
         driverId: ids.ada,
-        shopId: ids.shopId,
+        shopId: ids.shopId, shopName: DEMO_SHOP.name,
         scope: "view_add",
         startsAt: on(today, -1, 8),
         endsAt: on(today, 3, 17),
@@ -40,8 +40,8 @@ export async function seedPasses(ctx: SeedContext): Promise<{ active?: string; e
       .returning({ id: shopPass.id });
     await tx.insert(shopPassVehicle).values({ passId: active.id, vehicleId: first.id });
     await tx.insert(accessLog).values([
-      { passId: active.id, vehicleId: first.id, shopId: ids.shopId, actorUserId: ids.jo, actorName: jo, action: "read_logbook", at: on(today, -1, 9) },
-      { passId: active.id, vehicleId: first.id, shopId: ids.shopId, actorUserId: ids.wren, actorName: demoAccounts.wren.name, action: "read_logbook", at: on(today, -1, 11) },
+      { passId: active.id, vehicleId: first.id, shopId: ids.shopId, shopName: DEMO_SHOP.name, actorUserId: ids.jo, actorName: jo, action: "read_logbook", at: on(today, -1, 9) },
+      { passId: active.id, vehicleId: first.id, shopId: ids.shopId, shopName: DEMO_SHOP.name, actorUserId: ids.wren, actorName: demoAccounts.wren.name, action: "read_logbook", at: on(today, -1, 11) },
     ]);
 
     let expiredId: string | undefined;
@@ -50,7 +50,7 @@ export async function seedPasses(ctx: SeedContext): Promise<{ active?: string; e
         .insert(shopPass)
         .values({
           driverId: ids.ada,
-          shopId: ids.shopId,
+          shopId: ids.shopId, shopName: DEMO_SHOP.name,
           scope: "view_add",
           startsAt: on(today, -2, 8),
           endsAt: on(today, -1, 8),
@@ -69,9 +69,9 @@ export async function seedPasses(ctx: SeedContext): Promise<{ active?: string; e
         passId: expired.id,
       });
       await tx.insert(accessLog).values([
-        { passId: expired.id, vehicleId: second.id, shopId: ids.shopId, actorUserId: ids.jo, actorName: jo, action: "read_logbook", at: on(today, -2, 10) },
-        { passId: expired.id, vehicleId: second.id, shopId: ids.shopId, actorUserId: ids.jo, actorName: jo, action: "add_service", detail: "inspection", at: on(today, -2, 11) },
-        { passId: expired.id, vehicleId: second.id, shopId: ids.shopId, actorUserId: ids.jo, actorName: jo, action: "read_logbook", at: on(today, -2, 15) },
+        { passId: expired.id, vehicleId: second.id, shopId: ids.shopId, shopName: DEMO_SHOP.name, actorUserId: ids.jo, actorName: jo, action: "read_logbook", at: on(today, -2, 10) },
+        { passId: expired.id, vehicleId: second.id, shopId: ids.shopId, shopName: DEMO_SHOP.name, actorUserId: ids.jo, actorName: jo, action: "add_service", detail: "inspection", at: on(today, -2, 11) },
+        { passId: expired.id, vehicleId: second.id, shopId: ids.shopId, shopName: DEMO_SHOP.name, actorUserId: ids.jo, actorName: jo, action: "read_logbook", at: on(today, -2, 15) },
       ]);
       expiredId = expired.id;
     }

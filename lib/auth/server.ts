@@ -1,5 +1,6 @@
 import "server-only";
 import { betterAuth } from "better-auth";
+import { APIError } from "better-auth/api";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
 import { admin, organization } from "better-auth/plugins";
@@ -10,7 +11,9 @@ import { appUrl, env } from "@/lib/env";
 import { sendEmail } from "@/lib/email/send";
 import PasswordResetEmail from "@/emails/password-reset";
 import WelcomeEmail from "@/emails/welcome";
+import { isSingleLine } from "@/lib/validation/text";
 import { ac, shopRoles } from "./access";
+import { CLIENT_ADDRESS_HEADER } from "./endpoints";
 import { onboardNewUser } from "./onboarding";
 import { sendInvitation } from "./invitations";
 
@@ -37,18 +40,26 @@ function createAuth() {
       minPasswordLength: 10,
       resetPasswordTokenExpiresIn: 60 * 60,
       revokeSessionsOnPasswordReset: true,
+      // Not awaited: the answer must not take longer for an address that has an account.
       sendResetPassword: async ({ user, url }) => {
-        await sendEmail({
+        void sendEmail({
           to: user.email,
           subject: "Choose a new Fourpatch password",
           kind: "password-reset",
           react: createElement(PasswordResetEmail, { name: user.name, resetUrl: url }),
-        });
+        }).catch((err: unknown) => console.error(err));
       },
     },
     databaseHooks: {
       user: {
         create: {
+          // Display names reach e-mail subjects and shop screens: one line, no control characters.
+          before: async (u) => {
+            if (!isSingleLine(u.name) || u.name.trim().length === 0 || u.name.length > 80) {
+              throw new APIError("BAD_REQUEST", { message: "Use a name of at most 80 characters on one line." });
+            }
+            return { data: u };
+          },
           after: async (user) => {
             await onboardNewUser({ userId: user.id });
             await sendEmail({
@@ -72,8 +83,9 @@ function createAuth() {
       },
     },
     advanced: {
-      // Behind the loopback there is no proxy header; count by the socket's peer.
-      ipAddress: { ipAddressHeaders: ["x-forwarded-for", "x-real-ip"] },
+      // The client's real address, set by lib/auth/endpoints.ts from the socket
+      // (or from X-Forwarded-For only behind FOURPATCH_TRUSTED_PROXY); never a header the client chose.
+      ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
     },
     plugins: [
       admin({ defaultRole: "user", adminRoles: ["admin"] }),

@@ -5,9 +5,8 @@ import "server-only";
 import { render } from "@react-email/render";
 import type { ReactElement } from "react";
 import { Resend } from "resend";
-import { appUrl, env, usingFakeEmail } from "@/lib/env";
-
-export const FAKE_RESEND_KEY = "re_local_fake";
+import { devFakeKey } from "@/lib/dev-fakes";
+import { appUrl, emailDisabled, env, usingFakeEmail } from "@/lib/env";
 
 export function fakeResendBaseUrl() {
   return `${appUrl()}/api/fake/resend`;
@@ -19,7 +18,7 @@ function resend() {
   if (!client) {
     const e = env();
     client = usingFakeEmail()
-      ? new Resend(FAKE_RESEND_KEY, { baseUrl: fakeResendBaseUrl() })
+      ? new Resend(devFakeKey("resend"), { baseUrl: fakeResendBaseUrl() })
       : new Resend(e.RESEND_API_KEY, e.RESEND_BASE_URL ? { baseUrl: e.RESEND_BASE_URL } : undefined);
   }
   return client;
@@ -51,6 +50,11 @@ export type SendEmailResult = { ok: true; id: string } | { ok: false; error: str
 export async function sendEmail(input: SendEmailInput): Promise<SendEmailResult> {
   // The seed script runs with no server to receive the fake's messages.
   if (process.env.FOURPATCH_EMAIL_DELIVERY === "skip") return { ok: false, error: "E-mail delivery is switched off." };
+  // No real key and no fakes: send nothing rather than keep a readable copy anywhere.
+  if (emailDisabled()) {
+    console.warn(`Fourpatch: e-mail (${input.kind}) not sent: set RESEND_API_KEY, or FOURPATCH_DEV_FAKES=on for the local outbox.`);
+    return { ok: false, error: "E-mail is not configured." };
+  }
   const [html, text] = await Promise.all([render(input.react), render(input.react, { plainText: true })]);
   const headers: Record<string, string> = {};
   if (input.unsubscribeUrl) {

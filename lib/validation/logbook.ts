@@ -5,6 +5,7 @@
 import { z } from "zod";
 import { COIN_RESULTS, decodeDotCode, isIsoDate, parseTireSize, validateVin, type CoinResult } from "@/lib/tires";
 import { depthToMm, distanceToKm, pressureToKpa, type DepthUnit, type PressureUnit } from "@/lib/units";
+import { decimalFromText } from "./text";
 
 const blank = (v: unknown) => (v === "" || v === null || (typeof v === "string" && v.trim() === "") ? undefined : v);
 
@@ -20,7 +21,7 @@ const optNumber = (min: number, max: number, what: string) =>
   z.preprocess(
     (v) => {
       const b = blank(v);
-      if (typeof b === "string") return Number(b.replace(",", "."));
+      if (typeof b === "string") return decimalFromText(b);
       return b;
     },
     z

@@ -1,6 +1,7 @@
 // Shop passes: what a driver sends to issue or extend one. The same schemas
 // check the route handlers' bodies and the forms in the browser.
 import { z } from "zod";
+import { decimalFromText } from "./text";
 
 const HOUR_MS = 60 * 60 * 1000;
 
@@ -28,12 +29,12 @@ const presetValues = PASS_PRESETS.map((p) => p.value) as unknown as ["4h", "8h",
 
 const customDays = z.preprocess(
   (v) => (v === "" || v == null ? undefined : v),
-  z.coerce
+  z.preprocess(decimalFromText, z.coerce
     .number({ error: "Enter a number of days." })
     .int("Use whole days.")
     .min(1, "A custom pass lasts at least 1 day.")
     .max(MAX_PASS_DAYS, `A pass lasts at most ${MAX_PASS_DAYS} days.`)
-    .optional(),
+    .optional()),
 );
 
 const durationFields = {

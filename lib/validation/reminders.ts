@@ -2,6 +2,7 @@
 // (jurisdiction and the e-mail switch have their own columns) and edited by
 // the form on /reminders. The same schema parses both.
 import { z } from "zod";
+import { decimalFromText } from "./text";
 import { JURISDICTIONS, type Jurisdiction, type ReminderKind } from "@/lib/tires";
 
 export const REMINDER_KINDS = ["age-watch", "age-replace", "depth-limit", "seasonal-swap", "rotation-due"] as const satisfies readonly ReminderKind[];
@@ -36,7 +37,7 @@ const monthDay = z
 
 /** Lead times (days before the date) for calendar alarms; at most three, each 0–180. */
 const leadDays = z
-  .array(z.coerce.number().int("Whole days only.").min(0, "At least 0 days.").max(180, "At most 180 days."))
+  .array(z.preprocess(decimalFromText, z.coerce.number().int("Whole days only.").min(0, "At least 0 days.").max(180, "At most 180 days.")))
   .max(3, "At most three alarms.")
   .transform((a) => [...new Set(a)].sort((x, y) => y - x));
 
@@ -44,11 +45,11 @@ export const reminderSettingsSchema = z.object({
   kinds: z.array(z.enum(REMINDER_KINDS)).default([...REMINDER_KINDS]),
   alarmLeadDays: leadDays.default([14, 1]),
   /** How many days before an item its e-mail goes out (Plus). */
-  emailLeadDays: z.coerce.number().int("Whole days only.").min(0, "At least 0 days.").max(180, "At most 180 days.").default(14),
-  customDepthMm: z.coerce.number().min(0.5, "At least 0.5 mm.").max(10, "At most 10 mm.").optional(),
+  emailLeadDays: z.preprocess(decimalFromText, z.coerce.number().int("Whole days only.").min(0, "At least 0 days.").max(180, "At most 180 days.").default(14)),
+  customDepthMm: z.preprocess(decimalFromText, z.coerce.number().min(0.5, "At least 0.5 mm.").max(10, "At most 10 mm.").optional()),
   autumnSwap: monthDay.default("10-15"),
   springSwap: monthDay.default("04-15"),
-  rotationIntervalKm: z.coerce.number().int("Whole kilometres only.").min(1000, "At least 1,000 km.").max(50_000, "At most 50,000 km.").default(10_000),
+  rotationIntervalKm: z.preprocess(decimalFromText, z.coerce.number().int("Whole kilometres only.").min(1000, "At least 1,000 km.").max(50_000, "At most 50,000 km.").default(10_000)),
 });
 
 export type StoredReminderSettings = z.output<typeof reminderSettingsSchema>;
@@ -95,13 +96,13 @@ function validTimeZone(tz: string): boolean {
 export const reminderSettingsFormSchema = z
   .object({
     jurisdiction: z.enum(JURISDICTIONS as [Jurisdiction, ...Jurisdiction[]], { message: "Choose a region." }),
-    customDepthMm: z.preprocess((v) => (v === "" || v == null ? undefined : v), z.coerce.number().min(0.5, "At least 0.5 mm.").max(10, "At most 10 mm.").optional()),
+    customDepthMm: z.preprocess((v) => (v === "" || v == null ? undefined : v), z.preprocess(decimalFromText, z.coerce.number().min(0.5, "At least 0.5 mm.").max(10, "At most 10 mm.").optional())),
     kinds: z.preprocess(list, z.array(z.enum(REMINDER_KINDS))),
     alarmLeadDays: z.preprocess(list, leadDays),
-    emailLeadDays: z.coerce.number({ message: "Enter a number of days." }).int("Whole days only.").min(0, "At least 0 days.").max(180, "At most 180 days."),
+    emailLeadDays: z.preprocess(decimalFromText, z.coerce.number({ message: "Enter a number of days." }).int("Whole days only.").min(0, "At least 0 days.").max(180, "At most 180 days.")),
     autumnSwap: monthDay,
     springSwap: monthDay,
-    rotationIntervalKm: z.coerce.number({ message: "Enter a distance in km." }).int("Whole kilometres only.").min(1000, "At least 1,000 km.").max(50_000, "At most 50,000 km."),
+    rotationIntervalKm: z.preprocess(decimalFromText, z.coerce.number({ message: "Enter a distance in km." }).int("Whole kilometres only.").min(1000, "At least 1,000 km.").max(50_000, "At most 50,000 km.")),
     emailReminders: checkbox,
     timezone: z.string().trim().min(1, "Choose a time zone.").refine(validTimeZone, "That time zone is unknown."),
   })

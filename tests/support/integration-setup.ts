@@ -11,6 +11,7 @@ process.env.BETTER_AUTH_URL = "http://fourpatch.test";
 process.env.BETTER_AUTH_SECRET = "integration-tests-secret-0123456789abcdef";
 process.env.FOURPATCH_AUTH_RATE_LIMIT = "off";
 process.env.FOURPATCH_SCHEDULER = "off";
+process.env.FOURPATCH_DEV_FAKES = "on";
 delete process.env.DATABASE_URL;
 // Process-wide singletons (db client, auth) must not leak from one test file into the next.
 for (const key of ["__fourpatchDb", "__fourpatchMigrated", "__fourpatchAuth"]) delete (globalThis as Record<string, unknown>)[key];

@@ -4,6 +4,7 @@ import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { member, organization, shopProfile, user } from "@/db/schema";
 import { auth } from "@/lib/auth/server";
+import { PEER_HEADER, peerHeaderForTests } from "@/lib/peer";
 
 export type TestUser = { id: string; email: string; name: string; headers: Headers; cookie: string };
 
@@ -38,9 +39,11 @@ export async function makeShop(opts: { name?: string; town?: string; owner: Test
 /** Builds a Request for a route handler, signed in as `as` when given. */
 export function request(
   url: string,
-  opts: { method?: string; body?: unknown; as?: TestUser; headers?: Record<string, string> } = {},
+  opts: { method?: string; body?: unknown; as?: TestUser; headers?: Record<string, string>; peer?: string } = {},
 ): Request {
   const headers = new Headers(opts.headers);
+  // The socket address the server would stamp on the request (lib/peer.ts).
+  if (opts.peer) headers.set(PEER_HEADER, peerHeaderForTests(opts.peer));
   if (opts.as) headers.set("cookie", opts.as.cookie);
   let body: BodyInit | undefined;
   if (opts.body instanceof FormData) body = opts.body;

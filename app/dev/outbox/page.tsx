@@ -1,7 +1,9 @@
 import Link from "next/link";
+import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 import { Brand } from "@/components/shell/brand";
 import { listFakeEmails } from "@/db/queries/outbox";
+import { checkDevFakeRequest } from "@/lib/dev-fakes";
 import { usingFakeEmail } from "@/lib/env";
 
 export const dynamic = "force-dynamic";
@@ -9,7 +11,8 @@ export const metadata = { title: "Outbox (local e-mail fake)" };
 
 // Development and tests only: with a real e-mail key this page does not exist.
 export default async function OutboxPage({ searchParams }: { searchParams: Promise<{ to?: string }> }) {
-  if (!usingFakeEmail()) notFound();
+  // Only with development fakes on, and only for a loopback client or an operator (lib/dev-fakes.ts).
+  if (!usingFakeEmail() || !(await checkDevFakeRequest(await headers())).ok) notFound();
   const { to } = await searchParams;
   const messages = await listFakeEmails({ to });
   return (

@@ -1,7 +1,7 @@
 // Shared set-up for the pass tests: invented drivers, vehicles and shops.
 import { eq, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { accessLog, fakeOutbox, serviceEntry, shopPass, shopPassVehicle, tire, tireSet, treadCheck, treadReading, vehicle } from "@/db/schema";
+import { accessLog, fakeOutbox, organization, serviceEntry, shopPass, shopPassVehicle, tire, tireSet, treadCheck, treadReading, vehicle } from "@/db/schema";
 import { sessionFromRequest } from "@/lib/auth/session";
 import { request, type TestUser } from "../../support/users";
 
@@ -49,6 +49,7 @@ export async function insertPass(opts: {
     .values({
       driverId: opts.driver.id,
       shopId: opts.shopId,
+      shopName: (await db.select({ name: organization.name }).from(organization).where(eq(organization.id, opts.shopId)))[0]?.name,
       scope: opts.scope ?? "view_add",
       startsAt: opts.startsAt,
       endsAt: opts.endsAt,

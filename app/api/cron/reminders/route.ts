@@ -4,6 +4,7 @@
 // Authorization: Bearer <CRON_SECRET>; without a configured secret the route stays shut.
 import { createHash, timingSafeEqual } from "node:crypto";
 import { NextResponse } from "next/server";
+import { route } from "@/lib/api/handler";
 import { env } from "@/lib/env";
 import { runReminderDeliveries } from "@/lib/reminders/run";
 
@@ -19,13 +20,17 @@ function authorised(req: Request): boolean {
   return timingSafeEqual(a, b);
 }
 
-async function run(req: Request) {
+const run = route(async ({ req }) => {
   if (!authorised(req)) {
     return NextResponse.json({ error: { code: "unauthenticated", message: "A valid cron secret is required." } }, { status: 401, headers: { "www-authenticate": "Bearer" } });
   }
   const summary = await runReminderDeliveries({ now: new Date() });
   return NextResponse.json({ ok: true, summary });
-}
+}, {
+  auth: "optional",
+  // Called by schedulers, never by a browser: the CRON_SECRET bearer is the permission, not a cookie.
+  crossSite: { allowedBecause: "authenticated by the CRON_SECRET bearer token" },
+});
 
 export const POST = run;
 // Some hosted schedulers can only send GET.

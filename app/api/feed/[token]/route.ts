@@ -6,14 +6,29 @@ import { todayIn } from "@/lib/reminders/describe";
 import { buildFeed } from "@/lib/reminders/feed";
 import { tokenFromPath } from "@/lib/reminders/token";
 import { appUrl } from "@/lib/env";
+import { clientAddress } from "@/lib/peer";
+import { hitLimit, LIMITS, RateLimitedError } from "@/lib/rate-limit";
 
 export const dynamic = "force-dynamic";
 
 const notFound = () =>
   new Response("Not found\n", { status: 404, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });
 
-export async function GET(_req: Request, ctx: { params: Promise<{ token: string }> }) {
-  const token = tokenFromPath((await ctx.params).token);
+export async function GET(req: Request, ctx: { params: Promise<{ token: string }> }) {
+  // Calendar apps poll a few times an hour; a guesser trying secrets is held back by its real address.
+  try {
+    hitLimit(LIMITS.feed, `ip:${clientAddress(req.headers) ?? "unknown"}`);
+  } catch (err) {
+    if (!(err instanceof RateLimitedError)) throw err;
+    return new Response("Too many requests\n", { status: 429, headers: { "content-type": "text/plain; charset=utf-8", "retry-after": String(err.retryAfterSeconds) } });
+  }
+  let segment: string;
+  try {
+    segment = (await ctx.params).token;
+  } catch {
+    return notFound();
+  }
+  const token = tokenFromPath(segment);
   if (!token) return notFound();
   const userId = await userForFeedToken({ token });
   if (!userId) return notFound();

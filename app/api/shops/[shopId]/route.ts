@@ -1,6 +1,7 @@
 // A shop's profile and staff: its owner's to read and edit.
 import { getShopForOwner, updateShopProfile } from "@/db/queries/shops";
 import { parseJson, route } from "@/lib/api/handler";
+import { requireShopMember } from "@/lib/auth/roles";
 import { shopProfileSchema } from "@/lib/validation/shops";
 
 export const dynamic = "force-dynamic";
@@ -11,6 +12,8 @@ export const GET = route<{ shopId: string }>(async ({ session, params }) => {
 });
 
 export const PATCH = route<{ shopId: string }>(async ({ req, session, params }) => {
+  // The owner check comes before the body is judged: a technician learns nothing from validation messages.
+  await requireShopMember(session, { shopId: params.shopId, role: "owner" });
   const input = await parseJson(req, shopProfileSchema);
   return { shop: await updateShopProfile({ session, shopId: params.shopId, input }) };
 });

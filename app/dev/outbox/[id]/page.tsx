@@ -1,12 +1,15 @@
 import Link from "next/link";
+import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 import { getFakeEmail } from "@/db/queries/outbox";
+import { checkDevFakeRequest } from "@/lib/dev-fakes";
 import { usingFakeEmail } from "@/lib/env";
 
 export const dynamic = "force-dynamic";
 
 export default async function OutboxMessagePage({ params }: { params: Promise<{ id: string }> }) {
-  if (!usingFakeEmail()) notFound();
+  // Only with development fakes on, and only for a loopback client or an operator (lib/dev-fakes.ts).
+  if (!usingFakeEmail() || !(await checkDevFakeRequest(await headers())).ok) notFound();
   const { id } = await params;
   if (!/^[0-9a-f-]{36}$/.test(id)) notFound();
   const message = await getFakeEmail({ id });

@@ -1,8 +1,11 @@
 // The local fake of the Resend API's `POST /emails`, used by the resend SDK
-// when no real key is configured. It keeps each message in the outbox.
+// when no real key is configured and development fakes are switched on. It
+// keeps each message in the outbox, and answers only this server's own key
+// (lib/dev-fakes.ts): anyone else gets a 404 or a 401.
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { storeFakeEmail } from "@/db/queries/outbox";
+import { assertDevFakeRequest } from "@/lib/dev-fakes";
 import { usingFakeEmail } from "@/lib/env";
 
 const addresses = z.union([z.string(), z.array(z.string())]).transform((v) => (Array.isArray(v) ? v : [v]));
@@ -18,11 +21,13 @@ const sendSchema = z.object({
 });
 
 export async function POST(req: Request) {
-  if (!usingFakeEmail()) return NextResponse.json({ message: "Not found" }, { status: 404 });
-  // The SDK sends `Authorization: Bearer <key>`; the real API refuses a missing key, so does the fake.
-  if (!req.headers.get("authorization")?.startsWith("Bearer ")) {
-    return NextResponse.json({ name: "missing_api_key", message: "Missing API key" }, { status: 401 });
+  try {
+    await assertDevFakeRequest(req, { key: "resend" });
+  } catch (refusal) {
+    if (refusal instanceof Response) return refusal;
+    throw refusal;
   }
+  if (!usingFakeEmail()) return NextResponse.json({ message: "Not found" }, { status: 404 });
   const parsed = sendSchema.safeParse(await req.json().catch(() => null));
   if (!parsed.success) {
     return NextResponse.json({ name: "validation_error", message: parsed.error.issues[0]?.message ?? "Invalid" }, { status: 422 });
