@@ -8,6 +8,19 @@ const nextConfig = {
   poweredByHeader: false,
   // The driver's pages lived under /garage before the vehicles overview got
   // its own name; old bookmarks, e-mails and calendar links keep working.
+  // Build files and other static answers; pages and routes get these and a CSP from proxy.ts.
+  async headers() {
+    return [
+      {
+        source: "/:path*",
+        headers: [
+          { key: "X-Content-Type-Options", value: "nosniff" },
+          { key: "X-Frame-Options", value: "DENY" },
+          { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
+        ],
+      },
+    ];
+  },
   async redirects() {
     return [
       { source: "/garage", destination: "/vehicles", permanent: true },

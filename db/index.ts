@@ -43,8 +43,9 @@ function open(): Client {
     pglite = new PGlite();
   } else {
     const dir = path.resolve(/*turbopackIgnore: true*/ dataDir);
-    release = acquireDataDirLock(dir);
+    // Created first, so that the lock is named after the folder's real path.
     fs.mkdirSync(dir, { recursive: true });
+    release = acquireDataDirLock(dir);
     pglite = new PGlite(dir);
   }
   const db = drizzlePglite({ client: pglite, schema, casing: "snake_case" });

@@ -1,6 +1,7 @@
 // PGlite takes no lock on its data folder, and a second process that opens
 // the same folder silently loses committed writes. This exclusive lock file,
 // taken before PGlite opens, makes that impossible.
+import crypto from "node:crypto";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -19,8 +20,23 @@ export class DataDirLockedError extends Error {
   }
 }
 
+/**
+ * The lock lives in this machine's temporary folder, named after the data
+ * folder's real path: copying or moving an app folder (or the data folder)
+ * never carries a stale lock along, and a symlinked path finds the same lock.
+ * FOURPATCH_LOCK_DIR overrides the folder.
+ */
 export function lockPathFor(dataDir: string) {
-  return path.join(path.dirname(path.resolve(dataDir)), `.${path.basename(path.resolve(dataDir))}.lock`);
+  const abs = path.resolve(dataDir);
+  let real = abs;
+  try {
+    real = fs.realpathSync(abs);
+  } catch {
+    // Not created yet: its resolved path is its identity.
+  }
+  const dir = process.env.FOURPATCH_LOCK_DIR || path.join(os.tmpdir(), "fourpatch-locks");
+  const id = crypto.createHash("sha256").update(real).digest("hex").slice(0, 24);
+  return path.join(dir, `${path.basename(real).replace(/[^\w.-]/g, "_")}-${id}.lock`);
 }
 
 function isAlive(pid: number) {
@@ -37,7 +53,7 @@ function isAlive(pid: number) {
 export function acquireDataDirLock(dataDir: string): () => void {
   const lockPath = lockPathFor(dataDir);
   fs.mkdirSync(path.dirname(lockPath), { recursive: true });
-  const body = JSON.stringify({ pid: process.pid, host: os.hostname(), since: new Date().toISOString() });
+  const body = JSON.stringify({ pid: process.pid, host: os.hostname(), dataDir: path.resolve(dataDir), since: new Date().toISOString() });
 
   for (let attempt = 0; attempt < 2; attempt++) {
     try {

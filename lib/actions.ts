@@ -7,6 +7,7 @@ import { getSession, type Session } from "@/lib/auth/session";
 import { requireAdmin, requireSession } from "@/lib/auth/roles";
 import { toAppError, type FieldErrors } from "@/lib/errors";
 import { fieldErrors } from "@/lib/validation/fields";
+import { findHostileText, HOSTILE_TEXT_MESSAGE } from "@/lib/validation/text";
 
 export type ActionResult<T = undefined> =
   | { status: "ok"; data: T; message?: string }
@@ -24,6 +25,9 @@ export function action<S extends z.ZodType, T>(
       const session = await getSession();
       const s = options.role === "admin" ? requireAdmin(session) : requireSession(session);
       const input = raw instanceof FormData ? Object.fromEntries(raw.entries()) : raw;
+      // The same rule as route handlers: no control characters reach the database.
+      const hostile = findHostileText(input);
+      if (hostile !== null) return { status: "error", message: "Some fields hold characters that are not allowed.", fields: { [hostile]: [HOSTILE_TEXT_MESSAGE] } };
       const parsed = schema.safeParse(input);
       if (!parsed.success) return { status: "error", message: "Some fields need attention.", fields: fieldErrors(parsed.error) };
       const data = await fn(parsed.data, { session: s });

@@ -9,14 +9,15 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
+import { safeNextPath } from "@/lib/safe-next";
 import { forgotPasswordSchema, resetPasswordSchema, signInSchema, signUpSchema } from "@/lib/validation/auth";
 
 type FieldSpec<T> = { name: Path<T & FieldValues>; label: string; type: string; autoComplete: string; hint?: string };
 
 function useSafeNext() {
   const next = useSearchParams().get("next");
-  // Only same-site paths, so the parameter cannot send anyone elsewhere.
-  return next && next.startsWith("/") && !next.startsWith("//") ? next : "/start";
+  // Only paths of this app, so the parameter cannot send anyone elsewhere (lib/safe-next.ts).
+  return safeNextPath(next, typeof window === "undefined" ? "http://localhost" : window.location.origin);
 }
 
 function FormFields<T extends FieldValues>({ form, fields }: { form: ReturnType<typeof useForm<T>>; fields: FieldSpec<T>[] }) {
