@@ -55,6 +55,14 @@ describe("reminder settings", () => {
     expect(saved.settings.autumnSwap).toBe("10-15");
   });
 
+  it("GET answers every field PUT requires, so what was read can be written back unchanged", async () => {
+    const got = (await (await settingsGET(request("/api/reminders/settings", { as: u }), ctx({}))).json()) as {
+      jurisdiction: string; emailReminders: boolean; timezone: string; settings: Record<string, unknown>;
+    };
+    const res = await put(u, { jurisdiction: got.jurisdiction, emailReminders: got.emailReminders, timezone: got.timezone, ...got.settings });
+    expect(res.status).toBe(200);
+  });
+
   it("shows the saved kinds, alarm and swap date in the feed", async () => {
     expect((await put(u, form)).status).toBe(200);
     const { text, events } = await feedEvents(token);

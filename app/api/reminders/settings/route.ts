@@ -10,7 +10,8 @@ export const GET = route(async ({ session }) => {
   const s = requireSession(session);
   const profile = await reminderProfile({ userId: s.user.id });
   if (!profile) throw notFound("Your driver profile");
-  return { plan: profile.plan, jurisdiction: profile.jurisdiction, emailReminders: profile.emailReminders, settings: profile.settings };
+  // Everything PUT takes, so a client can read, change one field and write back.
+  return { plan: profile.plan, jurisdiction: profile.jurisdiction, emailReminders: profile.emailReminders, timezone: profile.timezone, settings: profile.settings };
 });
 
 export const PUT = route(async ({ req, session }) => {
