@@ -123,16 +123,48 @@ export async function revokeFeed({ userId }: { userId: string }): Promise<void> 
   await db.update(reminderFeed).set({ revokedAt: new Date() }).where(and(eq(reminderFeed.userId, userId), isNull(reminderFeed.revokedAt)));
 }
 
-/** The driver a live feed secret stands for, or null; records the fetch. */
-export async function userForFeedToken({ token }: { token: string }): Promise<string | null> {
+/** How stale the feed's "a calendar app last read it" may be: one write per hour at most, not one per poll. */
+export const FEED_FETCH_STAMP_MS = 60 * 60 * 1000;
+
+export type LiveFeed = { id: string; userId: string; contentTag: string | null; contentChangedAt: Date | null };
+
+/** The live feed a secret stands for, or null. Notes the fetch at most once per FEED_FETCH_STAMP_MS. */
+export async function feedForToken({ token, now = new Date() }: { token: string; now?: Date }): Promise<LiveFeed | null> {
   const [row] = await db
-    .update(reminderFeed)
-    .set({ lastFetchedAt: new Date() })
+    .select({
+      id: reminderFeed.id,
+      userId: reminderFeed.userId,
+      lastFetchedAt: reminderFeed.lastFetchedAt,
+      contentTag: reminderFeed.contentTag,
+      contentChangedAt: reminderFeed.contentChangedAt,
+      banned: user.banned,
+    })
+    .from(reminderFeed)
+    .innerJoin(user, eq(user.id, reminderFeed.userId))
     .where(and(eq(reminderFeed.tokenHash, hashFeedToken(token)), isNull(reminderFeed.revokedAt)))
-    .returning({ userId: reminderFeed.userId });
-  if (!row) return null;
-  const [u] = await db.select({ banned: user.banned }).from(user).where(eq(user.id, row.userId)).limit(1);
-  return u && !u.banned ? row.userId : null;
+    .limit(1);
+  if (!row || row.banned) return null;
+  if (!row.lastFetchedAt || now.getTime() - row.lastFetchedAt.getTime() >= FEED_FETCH_STAMP_MS) {
+    await db.update(reminderFeed).set({ lastFetchedAt: now }).where(eq(reminderFeed.id, row.id));
+  }
+  return { id: row.id, userId: row.userId, contentTag: row.contentTag, contentChangedAt: row.contentChangedAt };
+}
+
+/** The driver a live feed secret stands for, or null. */
+export async function userForFeedToken({ token }: { token: string }): Promise<string | null> {
+  return (await feedForToken({ token }))?.userId ?? null;
+}
+
+/**
+ * Records what the feed now serves. Returns when that content first appeared:
+ * unchanged content keeps its old time (and writes nothing).
+ */
+export async function noteFeedContent({ feed, tag, now }: { feed: LiveFeed; tag: string; now: Date }): Promise<Date> {
+  if (feed.contentTag === tag && feed.contentChangedAt) return feed.contentChangedAt;
+  // Whole seconds: HTTP dates carry no fractions, and If-Modified-Since compares them.
+  const at = new Date(Math.floor(now.getTime() / 1000) * 1000);
+  await db.update(reminderFeed).set({ contentTag: tag, contentChangedAt: at }).where(eq(reminderFeed.id, feed.id));
+  return at;
 }
 
 // ---- e-mail deliveries -------------------------------------------------
