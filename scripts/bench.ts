@@ -10,7 +10,7 @@
 //
 // BENCH_SECONDS (default 8) per endpoint; BENCH_SIZES=demo,large;
 // BENCH_SKIP_BUILD=1 reuses .next-bench; BENCH_REUSE_DATA=1 keeps loaded folders;
-// BENCH_SKIP_CORE=1 skips the computation core.
+// BENCH_SKIP_CORE=1 skips the computation core; BENCH_PORT (default 3390, and the next one).
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
@@ -305,7 +305,7 @@ async function main() {
   }
   const budgets: { what: string; ok: boolean }[] = [];
   for (const [i, size] of SIZES.entries()) {
-    const out = await benchSize(size, 3390 + i);
+    const out = await benchSize(size, Number(process.env.BENCH_PORT ?? 3390) + i);
     log(`\n== ${size} data set (${SECONDS} s per endpoint, 10 connections, loopback; the machine may be shared: compare ratios)`);
     log(`${pad("endpoint", 34)} ${pad("status", 6, true)} ${pad("bytes", 9, true)} ${pad("req/s", 8, true)} ${pad("p50 ms", 7, true)} ${pad("p99 ms", 7, true)} ${pad("errors", 7, true)} ${pad("ratio", 7, true)}`);
     for (const r of out.results) {

@@ -8,7 +8,7 @@ import { driverProfile, emailOptOut, reminderDelivery, reminderFeed, user } from
 import { loadLogbookInput } from "@/db/queries/logbook-input";
 import { planAllowsKind, type Plan } from "@/lib/plan";
 import { hashFeedToken, newFeedToken } from "@/lib/reminders/token";
-import { computeReminders, JURISDICTIONS, type Jurisdiction, type ReminderItem, type Skipped } from "@/lib/tires";
+import { computeReminders, JURISDICTIONS, type Jurisdiction, type LogbookInput, type ReminderItem, type Skipped } from "@/lib/tires";
 import { parseStoredSettings, type StoredReminderSettings } from "@/lib/validation/reminders";
 
 export type ReminderProfile = {
@@ -52,14 +52,15 @@ export type DriverReminders = { profile: ReminderProfile; items: ReminderItem[];
  * The driver's coming reminders in date order: the core's computation over
  * their whole logbook, narrowed to the kinds they chose and their plan allows.
  */
-export async function remindersFor({ userId, today }: { userId: string; today: string }): Promise<DriverReminders | null> {
+export async function remindersFor({ userId, today, logbook }: { userId: string; today: string; logbook?: LogbookInput }): Promise<DriverReminders | null> {
   const profile = await reminderProfile({ userId });
   if (!profile) return null;
-  return { profile, ...(await computeFor({ profile, today })) };
+  return { profile, ...(await computeFor({ profile, today, logbook })) };
 }
 
-export async function computeFor({ profile, today }: { profile: ReminderProfile; today: string }) {
-  const logbook = await loadLogbookInput({ ownerId: profile.userId });
+/** `logbook`: the driver's whole logbook when the caller loaded it already (the overview). */
+export async function computeFor({ profile, today, logbook: loaded }: { profile: ReminderProfile; today: string; logbook?: LogbookInput }) {
+  const logbook = loaded ?? (await loadLogbookInput({ ownerId: profile.userId }));
   const s = profile.settings;
   const result = computeReminders(
     logbook,
