@@ -6,6 +6,7 @@ ALTER TABLE "access_log" ADD COLUMN "visit_start" timestamp with time zone;--> s
 ALTER TABLE "access_log" ADD COLUMN "count" integer DEFAULT 1 NOT NULL;--> statement-breakpoint
 ALTER TABLE "access_log" ADD COLUMN "last_at" timestamp with time zone;--> statement-breakpoint
 ALTER TABLE "shop_pass" ADD COLUMN "ended_at" timestamp with time zone GENERATED ALWAYS AS (least(ends_at, coalesce(revoked_at, ends_at))) STORED NOT NULL;--> statement-breakpoint
+CREATE INDEX "invitation_inviter_id_idx" ON "invitation" USING btree ("inviter_id");--> statement-breakpoint
 CREATE INDEX "attachment_owner_idx" ON "attachment" USING btree ("owner_id");--> statement-breakpoint
 CREATE INDEX "attachment_uploaded_by_idx" ON "attachment" USING btree ("uploaded_by_user_id");--> statement-breakpoint
 CREATE INDEX "service_entry_set_idx" ON "service_entry" USING btree ("set_id");--> statement-breakpoint
