@@ -13,6 +13,7 @@
 // BENCH_SKIP_CORE=1 skips the computation core; BENCH_PORT (default 3390, and the next one).
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
+import zlib from "node:zlib";
 import path from "node:path";
 import autocannon from "autocannon";
 import { PGlite } from "@electric-sql/pglite";
@@ -222,6 +223,8 @@ async function benchSize(size: "demo" | "large", port: number) {
   let peak = 0;
   const sampler = setInterval(() => (peak = Math.max(peak, groupRssPeak(pgid).peakMb)), 500);
   const results: Result[] = [];
+  let stall: { aloneP50: number; besideP50: number; besideP99: number } | null = null;
+  const firstLoad: { name: string; kib: number; scripts: number; htmlKib: number }[] = [];
   try {
     await waitFor(`${base}/api/auth/ok`, 120_000);
     const cookies = {
@@ -264,6 +267,35 @@ async function benchSize(size: "demo" | "large", port: number) {
       const non2xx = ok.includes(304) ? r["3xx"] === 0 ? r.non2xx : r.non2xx - r["3xx"] : r.non2xx;
       results.push({ name: e.name, reqs: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.timeouts, non2xx, bytes, status: first.status, budget: e.budget });
     }
+
+    // One heavy request must not stall the rest: the trivial route alone, then beside the heaviest logbook.
+    const heavy = fx.bigCarId ? { path: `/api/vehicles/${fx.bigCarId}`, cookie: cookies.big } : { path: `/api/vehicles/${fx.adaCarId}`, cookie: cookies.ada };
+    const alone = await cannon({ url: `${base}/api/auth/ok`, connections: 5, duration: Math.max(3, SECONDS / 2) });
+    const [beside] = await Promise.all([
+      cannon({ url: `${base}/api/auth/ok`, connections: 5, duration: Math.max(3, SECONDS / 2) }),
+      cannon({ url: `${base}${heavy.path}`, headers: { cookie: heavy.cookie }, connections: 5, duration: Math.max(3, SECONDS / 2) }),
+    ]);
+    stall = { aloneP50: alone.latency.p50, besideP50: beside.latency.p50, besideP99: beside.latency.p99 };
+
+    // First-load JS of each page: the scripts its HTML loads, gzipped (what a phone downloads before it can respond).
+    const pages: [string, string, string][] = [
+      ["landing /", "/", ""],
+      ["overview /vehicles", "/vehicles", cookies.ada],
+      ["vehicle page", `/vehicles/${fx.adaCarId}`, cookies.ada],
+      ["set page", `/sets/${fx.adaSetId}`, cookies.ada],
+      ["shop pass list /shop", "/shop", cookies.jo],
+      ...(fx.passId ? [["technician view", `/shop/passes/${fx.passId}/${fx.passVehicleId}`, cookies.jo] as [string, string, string]] : []),
+    ];
+    for (const [name, p, cookie] of pages) {
+      const html = await (await fetch(`${base}${p}`, { headers: cookie ? { cookie } : {} })).text();
+      const srcs = [...new Set([...html.matchAll(/<script[^>]+src="([^"]+\.js)"/g)].map((m) => m[1]))];
+      let gz = 0;
+      for (const src of srcs) {
+        const file = path.join(root, DIST, src.replace(/^\/_next\//, "").split("?")[0]);
+        if (fs.existsSync(file)) gz += zlib.gzipSync(fs.readFileSync(file), { level: 9 }).length;
+      }
+      firstLoad.push({ name, kib: gz / 1024, scripts: srcs.length, htmlKib: Buffer.byteLength(html) / 1024 });
+    }
   } finally {
     clearInterval(sampler);
     peak = Math.max(peak, groupRssPeak(pgid).peakMb);
@@ -285,7 +317,7 @@ async function benchSize(size: "demo" | "large", port: number) {
   const walDir = path.join(dataDir, "pg_wal");
   const wal = fs.existsSync(walDir) ? du(walDir) : 0;
   const explains = await explainAll(dataDir, fx);
-  return { size, results, peak, dataBytes: size_, walBytes: wal, explains };
+  return { size, results, peak, dataBytes: size_, walBytes: wal, explains, stall, firstLoad };
 }
 
 function pad(s: string | number, n: number, left = false) {
@@ -320,6 +352,16 @@ async function main() {
     }
     log(`server peak RSS ${out.peak.toFixed(0)} MB; data folder ${(out.dataBytes / 1e6).toFixed(0)} MB (of it write-ahead log ${(out.walBytes / 1e6).toFixed(0)} MB)`);
     budgets.push({ what: `${size}: server peak RSS ≤ 500 MB (is ${out.peak.toFixed(0)} MB)`, ok: out.peak <= 500 });
+    if (out.stall) {
+      log(`trivial route p50 alone ${out.stall.aloneP50} ms; beside the heaviest logbook p50 ${out.stall.besideP50} ms, p99 ${out.stall.besideP99} ms (5 + 5 connections)`);
+    }
+    if (out.firstLoad.length) {
+      log("first-load JS (gzip -9 of the scripts each page's HTML loads; later dynamic imports not counted):");
+      for (const f of out.firstLoad) {
+        log(`  ${pad(f.name, 24)} ${pad(f.kib.toFixed(1), 7, true)} KiB in ${f.scripts} scripts; HTML ${f.htmlKib.toFixed(0)} KiB`);
+        if (size === "demo" && f.name !== "landing /") budgets.push({ what: `first-load JS of ${f.name} ≤ 170 KiB gzipped (is ${f.kib.toFixed(1)} KiB)`, ok: f.kib <= 170 });
+      }
+    }
     log("EXPLAIN:");
     for (const e of out.explains) {
       log(`  ${pad(e.name, 44)} ${e.verdict}`);

@@ -105,7 +105,7 @@ describe("pages of a vehicle's checks", () => {
   it("hands out every check once, newest first, and the logbook carries the first page and a cursor", async () => {
     const owner = await signUp();
     const { vehicle, set, tires } = await makeVehicle(owner);
-    const byPos = Object.fromEntries(tires.map((t) => [t.position, t.id])) as Record<"front_left" | "front_right" | "rear_left" | "rear_right", string>;
+    const byPos = Object.fromEntries(tires.map((t) => [t.position, t.id])) as Parameters<typeof addCheck>[0]["tires"];
     const ids: string[] = [];
     // Two checks on the same day: the entry time and the id break the tie.
     for (const [i, on] of ["2025-06-01", "2025-07-01", "2025-07-01", "2025-08-01", "2025-09-01"].entries()) {
