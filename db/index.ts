@@ -46,7 +46,11 @@ function open(): Client {
     // Created first, so that the lock is named after the folder's real path.
     fs.mkdirSync(dir, { recursive: true });
     release = acquireDataDirLock(dir);
-    pglite = new PGlite(dir);
+    // PGlite runs PostgreSQL in single-user mode: no checkpointer, no
+    // autovacuum. The write-ahead log only shrinks at a CHECKPOINT, which
+    // db/maintenance.ts runs after bulk changes and on a timer; these bound
+    // what a checkpoint keeps.
+    pglite = new PGlite(dir, { postgresqlconf: ["max_wal_size = 64MB", "min_wal_size = 32MB"] });
   }
   const db = drizzlePglite({ client: pglite, schema, casing: "snake_case" });
   return { kind: "pglite", db, pglite, release, dataDir };
@@ -71,12 +75,29 @@ export const db: Database = new Proxy({} as Database, {
 
 export const migrationsFolder = path.join(process.cwd(), "db/migrations");
 
-/** Applies pending migrations once per process. */
+/** Which engine the process uses: embedded PGlite or a PostgreSQL server. */
+export function databaseKind(): "pglite" | "pg" {
+  return client().kind;
+}
+
+/** Runs a statement outside the query builder (maintenance: ANALYZE, VACUUM, CHECKPOINT). */
+export async function execMaintenance(statement: string): Promise<void> {
+  const c = client();
+  if (c.kind === "pg") await c.pool.query(statement);
+  else await c.pglite.exec(statement);
+}
+
+/**
+ * Applies pending migrations once per process, then refreshes the planner's
+ * statistics: PGlite has no autovacuum, and without statistics every
+ * logbook query reads whole tables.
+ */
 export function migrateDb(): Promise<void> {
   globalForDb.__fourpatchMigrated ??= (async () => {
     const c = client();
     if (c.kind === "pg") await migratePg(c.db as never, { migrationsFolder });
     else await migratePglite(c.db, { migrationsFolder });
+    await execMaintenance("ANALYZE");
   })();
   return globalForDb.__fourpatchMigrated;
 }

@@ -2,9 +2,10 @@ import "server-only";
 // Daily jobs run inside the server process: no second process may open the
 // PGlite data folder. Jobs register themselves in lib/jobs.ts.
 import { dailyJobs } from "./jobs";
+import { CHECKPOINT_EVERY_MS } from "@/db/maintenance";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
-const globalForScheduler = globalThis as unknown as { __fourpatchScheduler?: NodeJS.Timeout };
+const globalForScheduler = globalThis as unknown as { __fourpatchScheduler?: NodeJS.Timeout; __fourpatchCheckpoints?: NodeJS.Timeout };
 
 export async function runDailyJobs(now = new Date()) {
   const results: Record<string, unknown> = {};
@@ -29,4 +30,9 @@ export function startScheduler() {
   }, 60_000);
   first.unref();
   globalForScheduler.__fourpatchScheduler = first;
+  // PGlite never checkpoints on its own: without this the write-ahead log grows without bound.
+  globalForScheduler.__fourpatchCheckpoints ??= setInterval(() => {
+    void import("@/db/maintenance").then((m) => m.checkpointDb()).catch((err) => console.error("[scheduler] checkpoint failed", err));
+  }, CHECKPOINT_EVERY_MS);
+  globalForScheduler.__fourpatchCheckpoints.unref();
 }

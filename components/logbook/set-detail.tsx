@@ -1,6 +1,7 @@
 "use client";
 // One set: each tire's age, depth, wear pattern and projection, the wear
 // chart, the readings table and the set's own limits.
+import dynamic from "next/dynamic";
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
@@ -18,7 +19,12 @@ import { api, keys } from "./api";
 import { formatDate, formatMoney, linkClass, setTitle } from "./format";
 import { SetSettings } from "./set-settings";
 import { TireList } from "./tire-list";
-import { WearChart } from "./wear-chart";
+// The chart library is most of this page's JavaScript: it loads after the
+// page is shown, into a box of the chart's own height (no layout shift).
+const WearChart = dynamic(() => import("./wear-chart").then((m) => m.WearChart), {
+  ssr: false,
+  loading: () => <div className="h-[22.5rem] w-full animate-pulse rounded bg-asphalt-50 sm:h-[26.5rem]" aria-label="Loading the wear chart" role="status" />,
+});
 
 export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: string }) {
   const { data } = useQuery({ queryKey: keys.set(initial.set.id), queryFn: () => api<SetDetail>(`/api/sets/${initial.set.id}`), initialData: initial });

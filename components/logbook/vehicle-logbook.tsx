@@ -23,6 +23,21 @@ import { formatBytes, formatDate, formatMoney, linkClass, setTitle } from "./for
 import { HistoryTable, historyRows } from "./history-table";
 import { ServiceEntryForm } from "./service-entry-form";
 import { TireList } from "./tire-list";
+import { useOlderHistory } from "./use-older-history";
+
+/** The logbook brings the newest history; older entries load on request. */
+function OlderHistory({ book }: { book: VehicleLogbook }) {
+  const older = useOlderHistory(book);
+  if (!older.hasMore) return null;
+  return (
+    <div className="flex flex-wrap items-center gap-3">
+      <Button type="button" variant="secondary" onClick={older.loadMore} disabled={older.loading} data-testid="older-history">
+        {older.loading ? "Loading…" : "Load older entries"}
+      </Button>
+      {older.error ? <p role="alert" className="text-sm text-red-800">{older.error.message}</p> : null}
+    </div>
+  );
+}
 
 /**
  * `queryUrl` and `canManage` let a shop's page show the same logbook under a
@@ -91,6 +106,7 @@ export function VehicleLogbookView({
           <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
         ) : null}
         <HistoryTable rows={historyRows(book, depthUnit)} distanceUnit={distanceUnit} />
+        {canManage ? <OlderHistory book={book} /> : null}
       </section>
 
       <section aria-labelledby="files-h" className="mb-8 space-y-3">

@@ -18,7 +18,9 @@ export function formatAt(d: Date | string) {
   return new Date(d).toLocaleString("en-GB", { timeZone: "UTC", day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" }) + " UTC";
 }
 
-export function AccessLogTable({ rows }: { rows: { id: string; at: Date | string; actorName: string; shopName: string; action: string; detail: string | null }[] }) {
+type AccessRow = { id: string; at: Date | string; actorName: string; shopName: string; action: string; detail: string | null; count?: number; lastAt?: Date | string | null };
+
+export function AccessLogTable({ rows }: { rows: AccessRow[] }) {
   if (rows.length === 0) return <p className="text-sm text-asphalt-600">No shop has opened this logbook yet.</p>;
   return (
     <div className="overflow-x-auto">
@@ -40,6 +42,13 @@ export function AccessLogTable({ rows }: { rows: { id: string; at: Date | string
               <td className="py-2">
                 {actionLabel(r.action)}
                 {r.detail ? <span className="text-asphalt-600"> · {r.detail.replace(/_/g, " ")}</span> : null}
+                {/* Reads of one visit are one row with a count. */}
+                {r.count && r.count > 1 ? (
+                  <span className="text-asphalt-600">
+                    {" "}
+                    · {r.count} times{r.lastAt ? `, last ${formatAt(r.lastAt)}` : ""}
+                  </span>
+                ) : null}
               </td>
             </tr>
           ))}

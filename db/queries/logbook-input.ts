@@ -12,38 +12,46 @@ type Position = TireInput["position"];
 export const toCoreKind = (k: (typeof tireSet.$inferSelect)["kind"]): SetKind => k.replace("_", "-") as SetKind;
 export const toCorePosition = (p: (typeof tire.$inferSelect)["position"]): Position => p.replace("_", "-") as Position;
 
+/** The rows a logbook computation starts from; loaded once, used by the overview and the reminders alike. */
+export type LogbookRows = Awaited<ReturnType<typeof loadLogbookRows>>;
+
 /**
- * The logbook of one driver (all vehicles) or of the given vehicles. Callers
- * authorise first: this reads whatever it is asked for.
+ * The rows of one driver's logbook (all vehicles) or of the given vehicles.
+ * Retired sets come without tires and readings: nothing computed from a
+ * logbook looks at them. Callers authorise first.
  */
-export async function loadLogbookInput(scope: { ownerId: string } | { vehicleIds: string[] }): Promise<LogbookInput> {
+export async function loadLogbookRows(scope: { ownerId: string } | { vehicleIds: string[] }) {
   const vehicles = await db
     .select({ id: vehicle.id, nickname: vehicle.nickname })
     .from(vehicle)
     .where("ownerId" in scope ? eq(vehicle.ownerId, scope.ownerId) : inArray(vehicle.id, scope.vehicleIds.length ? scope.vehicleIds : ["00000000-0000-0000-0000-000000000000"]))
     .orderBy(asc(vehicle.createdAt));
-  if (vehicles.length === 0) return { vehicles: [] };
+  if (vehicles.length === 0) return { vehicles, sets: [], tires: [], readings: [], odometers: [], services: [] };
   const vehicleIds = vehicles.map((v) => v.id);
-
-  const [sets, tires, readings, odometers, services] = await Promise.all([
-    db.select().from(tireSet).where(inArray(tireSet.vehicleId, vehicleIds)).orderBy(asc(tireSet.createdAt)),
+  const sets = await db.select().from(tireSet).where(inArray(tireSet.vehicleId, vehicleIds)).orderBy(asc(tireSet.createdAt));
+  const liveSetIds = sets.filter((s) => s.state !== "retired").map((s) => s.id);
+  const none = ["00000000-0000-0000-0000-000000000000"];
+  const [tires, readings, odometers, services] = await Promise.all([
     db
       .select({ t: tire, vehicleId: tireSet.vehicleId })
       .from(tire)
       .innerJoin(tireSet, eq(tire.setId, tireSet.id))
-      .where(inArray(tireSet.vehicleId, vehicleIds)),
+      .where(inArray(tire.setId, liveSetIds.length ? liveSetIds : none)),
     db
       .select({
+        checkId: treadReading.checkId,
         tireId: treadReading.tireId,
-        date: treadCheck.checkedOn,
+        checkedOn: treadCheck.checkedOn,
         odometerKm: treadCheck.odometerKm,
         innerMm: treadReading.innerMm,
         centreMm: treadReading.centreMm,
         outerMm: treadReading.outerMm,
+        pressureKpa: treadReading.pressureKpa,
+        approximate: treadReading.approximate,
       })
       .from(treadReading)
       .innerJoin(treadCheck, eq(treadReading.checkId, treadCheck.id))
-      .where(inArray(treadCheck.vehicleId, vehicleIds))
+      .where(and(inArray(treadCheck.vehicleId, vehicleIds), inArray(treadCheck.setId, liveSetIds.length ? liveSetIds : none)))
       .orderBy(asc(treadCheck.checkedOn)),
     db
       .select({ vehicleId: odometerReading.vehicleId, date: odometerReading.readOn, odometerKm: odometerReading.odometerKm })
@@ -55,13 +63,26 @@ export async function loadLogbookInput(scope: { ownerId: string } | { vehicleIds
       .where(and(inArray(serviceEntry.vehicleId, vehicleIds), inArray(serviceEntry.kind, ["fitting", "seasonal_swap", "rotation"])))
       .orderBy(asc(serviceEntry.performedOn)),
   ]);
+  return { vehicles, sets, tires, readings, odometers, services };
+}
 
+/**
+ * The logbook of one driver (all vehicles) or of the given vehicles. Callers
+ * authorise first: this reads whatever it is asked for.
+ */
+export async function loadLogbookInput(scope: { ownerId: string } | { vehicleIds: string[] }): Promise<LogbookInput> {
+  return toLogbookInput(await loadLogbookRows(scope));
+}
+
+/** The core's input from loaded rows. */
+export function toLogbookInput({ vehicles, sets, tires, readings, odometers, services }: LogbookRows): LogbookInput {
+  if (vehicles.length === 0) return { vehicles: [] };
   const readingsByTire = new Map<string, NonNullable<TireInput["readings"]>[number][]>();
   for (const r of readings) {
     // A check without an odometer cannot place the tire on the wear line.
     if (r.odometerKm == null) continue;
     const list = readingsByTire.get(r.tireId) ?? [];
-    list.push({ date: r.date, odometerKm: r.odometerKm, innerMm: r.innerMm, centreMm: r.centreMm, outerMm: r.outerMm });
+    list.push({ date: r.checkedOn, odometerKm: r.odometerKm, innerMm: r.innerMm, centreMm: r.centreMm, outerMm: r.outerMm });
     readingsByTire.set(r.tireId, list);
   }
 

@@ -82,6 +82,10 @@ export function tireView(opts: {
   readings: ReadingRow[];
   limitMm: number;
   odometerHistory: OdometerEntry[];
+  /** The vehicle's distance per day, computed once for all its tires. */
+  distance?: { kmPerDay: number };
+  /** False: no wear projection (retired sets, unless asked). */
+  project?: boolean;
   today: string;
 }): TireView {
   const { tire: t, set, today } = opts;
@@ -155,8 +159,8 @@ export function tireView(opts: {
 
   let projection: TireView["projection"] = null;
   const wearPoints = series.filter((s) => s.odometerKm != null).map((s) => ({ date: s.date, odometerKm: s.odometerKm as number, depthMm: s.depthMm }));
-  if (wearPoints.length > 0) {
-    const p = projectWear(wearPoints, { limitMm: opts.limitMm, today, odometerHistory: opts.odometerHistory });
+  if (wearPoints.length > 0 && opts.project !== false) {
+    const p = projectWear(wearPoints, { limitMm: opts.limitMm, today, odometerHistory: opts.odometerHistory, kmPerDay: opts.distance?.kmPerDay });
     if (p.ok) {
       projection = {
         method: p.method,

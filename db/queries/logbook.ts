@@ -1,7 +1,8 @@
 import "server-only";
 // Reading a driver's logbook: the vehicles overview, one vehicle's whole
 // logbook, one set. Every read goes through assertVehicleAccess first.
-import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNotNull, ne, sql } from "drizzle-orm";
+import { z } from "zod";
 import { db, type Transaction } from "@/db";
 import {
   accessLog,
@@ -18,9 +19,11 @@ import {
   user,
 } from "@/db/schema";
 import type { LogbookAccess } from "@/lib/auth/logbook-access";
-import { notFound } from "@/lib/errors";
-import { axlePattern, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
+import { decodeCursor, encodeCursor } from "@/lib/api/cursor";
+import { AppError, notFound } from "@/lib/errors";
+import { axlePattern, distancePerDay, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
 import { remindersFor } from "./reminders";
+import { loadLogbookRows, toLogbookInput } from "./logbook-input";
 import { assertVehicleAccess } from "./access";
 import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireView } from "./logbook-view";
 import type { Condition } from "@/lib/tires";
@@ -110,72 +113,99 @@ export type VehicleLogbook = {
   viewer: Prefs;
   sets: SetView[];
   checks: CheckView[];
+  /** Older checks: GET /api/vehicles/:id/checks?cursor=… */
+  checksNextCursor: string | null;
   service: ServiceView[];
+  /** Older service entries: GET /api/vehicles/:id/service-entries?cursor=… */
+  serviceNextCursor: string | null;
   attachments: AttachmentView[];
   odometer: { date: string; odometerKm: number; source: "reading" | "check" | "service" }[];
   lastOdometer: { date: string; odometerKm: number } | null;
-  accessLog: { id: string; at: string; actorName: string; action: string; detail: string | null; shopName: string }[];
+  /** The newest rows; the whole log pages through GET /api/passes/access-log. */
+  accessLog: { id: string; at: string; actorName: string; action: string; detail: string | null; count: number; lastAt: string | null; shopName: string }[];
   caution: string;
 };
 
-/** The whole logbook of one vehicle, with every tire's condition computed by lib/tires. */
+/** How many checks and service entries a logbook answer carries; older ones come page by page. */
+export const HISTORY_PAGE = 50;
+
+const historyCursor = z.object({ t: z.string().regex(/^\d{4}-\d{2}-\d{2}$/), c: z.string().min(1).max(40), id: z.string().uuid() });
+
+type LoadOptions = {
+  /** Only these sets' tires, readings and projections (the set page). */
+  setId?: string;
+  /** Retired sets are listed without a wear projection unless asked for. */
+  includeRetired?: boolean;
+  /** Checks and service entries in the answer (newest first); HISTORY_PAGE by default. */
+  historyLimit?: number;
+};
+
+/**
+ * One vehicle's logbook as its pages show it: every set with each tire's
+ * condition computed by lib/tires (one parsed odometer history for the whole
+ * vehicle), and the newest page of checks and service entries with cursors
+ * for older ones.
+ */
 export async function getVehicleLogbook({
   access,
   vehicleId,
   today,
   action = "read_logbook",
+  ...opts
 }: {
   access: LogbookAccess;
   vehicleId: string;
   today: string;
   action?: string;
-}): Promise<VehicleLogbook> {
+} & LoadOptions): Promise<VehicleLogbook> {
   await assertVehicleAccess(access, { vehicleId, action });
+  const limit = opts.historyLimit ?? HISTORY_PAGE;
   const [v] = await db.select().from(vehicle).where(eq(vehicle.id, vehicleId)).limit(1);
   if (!v) throw notFound("That vehicle");
   const [owner, viewer] = await Promise.all([driverPrefs({ userId: v.ownerId }), driverPrefs({ userId: access.userId })]);
 
-  const [sets, tires, checks, readings, services, files, odos] = await Promise.all([
-    db.select().from(tireSet).where(eq(tireSet.vehicleId, vehicleId)).orderBy(asc(tireSet.createdAt)),
-    db.select({ t: tire }).from(tire).innerJoin(tireSet, eq(tire.setId, tireSet.id)).where(eq(tireSet.vehicleId, vehicleId)),
-    db
-      .select({ c: treadCheck, shopName: organization.name, authorName: user.name })
-      .from(treadCheck)
-      .leftJoin(organization, eq(treadCheck.shopId, organization.id))
-      .leftJoin(user, eq(treadCheck.authorUserId, user.id))
-      .where(eq(treadCheck.vehicleId, vehicleId))
-      .orderBy(desc(treadCheck.checkedOn), desc(treadCheck.createdAt)),
+  const setScope = opts.setId ? and(eq(tireSet.vehicleId, vehicleId), eq(tireSet.id, opts.setId)) : eq(tireSet.vehicleId, vehicleId);
+  const [sets, tires, readings, checkPage, servicePage, files, odos, checkOdos, serviceOdos] = await Promise.all([
+    db.select().from(tireSet).where(setScope).orderBy(asc(tireSet.createdAt)),
+    db.select({ t: tire }).from(tire).innerJoin(tireSet, eq(tire.setId, tireSet.id)).where(setScope),
+    // Readings of the computed sets only, through the checks of those sets.
     db
       .select({ r: treadReading, checkedOn: treadCheck.checkedOn, odometerKm: treadCheck.odometerKm })
       .from(treadReading)
       .innerJoin(treadCheck, eq(treadReading.checkId, treadCheck.id))
-      .where(eq(treadCheck.vehicleId, vehicleId)),
+      .where(opts.setId ? and(eq(treadCheck.vehicleId, vehicleId), eq(treadCheck.setId, opts.setId)) : eq(treadCheck.vehicleId, vehicleId)),
+    pageChecks({ vehicleId, setId: opts.setId, limit }),
+    opts.setId ? Promise.resolve({ service: [], nextCursor: null }) : pageService({ vehicleId, limit }),
     db
-      .select({ s: serviceEntry, shopName: organization.name, authorName: user.name })
-      .from(serviceEntry)
-      .leftJoin(organization, eq(serviceEntry.shopId, organization.id))
-      .leftJoin(user, eq(serviceEntry.authorUserId, user.id))
-      .where(eq(serviceEntry.vehicleId, vehicleId))
-      .orderBy(desc(serviceEntry.performedOn), desc(serviceEntry.createdAt)),
-    db.select().from(attachment).where(eq(attachment.vehicleId, vehicleId)).orderBy(desc(attachment.createdAt)),
+      .select()
+      .from(attachment)
+      .where(opts.setId ? and(eq(attachment.vehicleId, vehicleId), eq(attachment.setId, opts.setId)) : eq(attachment.vehicleId, vehicleId))
+      .orderBy(desc(attachment.createdAt)),
     db.select().from(odometerReading).where(eq(odometerReading.vehicleId, vehicleId)),
+    // The odometer history needs every dated odometer, not the rest of the rows.
+    db.select({ date: treadCheck.checkedOn, odometerKm: treadCheck.odometerKm }).from(treadCheck).where(and(eq(treadCheck.vehicleId, vehicleId), isNotNull(treadCheck.odometerKm))),
+    db.select({ date: serviceEntry.performedOn, odometerKm: serviceEntry.odometerKm }).from(serviceEntry).where(and(eq(serviceEntry.vehicleId, vehicleId), isNotNull(serviceEntry.odometerKm))),
   ]);
 
   const readingRows: ReadingRow[] = readings.map(toReadingRow);
+  const readingsByTire = groupBy(readingRows, (r) => r.tireId);
+  const tiresBySet = groupBy(tires.map((t) => t.t), (t) => t.setId);
 
   const odometer: VehicleLogbook["odometer"] = [
     ...odos.map((o) => ({ date: o.readOn, odometerKm: o.odometerKm, source: "reading" as const })),
-    ...checks.filter((c) => c.c.odometerKm != null).map((c) => ({ date: c.c.checkedOn, odometerKm: c.c.odometerKm as number, source: "check" as const })),
-    ...services.filter((s) => s.s.odometerKm != null).map((s) => ({ date: s.s.performedOn, odometerKm: s.s.odometerKm as number, source: "service" as const })),
+    ...checkOdos.map((c) => ({ date: c.date, odometerKm: c.odometerKm as number, source: "check" as const })),
+    ...serviceOdos.map((s) => ({ date: s.date, odometerKm: s.odometerKm as number, source: "service" as const })),
   ].sort((a, b) => a.date.localeCompare(b.date) || a.odometerKm - b.odometerKm);
   const history: OdometerEntry[] = odometer.map((o) => ({ date: o.date, odometerKm: o.odometerKm }));
+  // Parsed once for the vehicle; every tire's projection uses it.
+  const distance = distancePerDay(history.filter((h) => h.date <= today));
   const last = odometer.reduce<{ date: string; odometerKm: number } | null>((m, o) => (!m || o.odometerKm > m.odometerKm ? { date: o.date, odometerKm: o.odometerKm } : m), null);
 
   const setViews: SetView[] = sets.map((s) => {
     const limit = limitFor(s, owner.jurisdiction, today);
-    const views = tires
-      .filter((t) => t.t.setId === s.id)
-      .map((t) => tireView({ tire: t.t, set: s, readings: readingRows, limitMm: limit.minMm, odometerHistory: history, today }))
+    const project = s.state !== "retired" || opts.includeRetired === true;
+    const views = (tiresBySet.get(s.id) ?? [])
+      .map((t) => tireView({ tire: t, set: s, readings: readingsByTire.get(t.id) ?? [], limitMm: limit.minMm, odometerHistory: history, distance, project, today }))
       .sort((a, b) => POSITION_ORDER[a.position] - POSITION_ORDER[b.position]);
     const axle = axlePattern({
       tires: views
@@ -208,43 +238,24 @@ export async function getVehicleLogbook({
   setViews.sort((a, b) => STATE_ORDER[a.state] - STATE_ORDER[b.state]);
 
   const log =
-    access.kind === "owner"
+    access.kind === "owner" && !opts.setId
       ? await db
-          .select({ id: accessLog.id, at: accessLog.at, actorName: accessLog.actorName, action: accessLog.action, detail: accessLog.detail, shopName: sql<string>`coalesce(${organization.name}, ${accessLog.shopName}, 'A closed shop')` })
+          .select({ id: accessLog.id, at: accessLog.at, actorName: accessLog.actorName, action: accessLog.action, detail: accessLog.detail, count: accessLog.count, lastAt: accessLog.lastAt, shopName: sql<string>`coalesce(${organization.name}, ${accessLog.shopName}, 'A closed shop')` })
           .from(accessLog)
           .leftJoin(organization, eq(accessLog.shopId, organization.id))
           .where(eq(accessLog.vehicleId, vehicleId))
-          .orderBy(desc(accessLog.at))
-          .limit(200)
+          .orderBy(desc(accessLog.at), desc(accessLog.id))
+          .limit(HISTORY_PAGE)
       : [];
 
   return {
     vehicle: v,
     viewer: { units: viewer.units, pressureUnit: viewer.pressureUnit, jurisdiction: owner.jurisdiction },
     sets: setViews,
-    checks: checks.map(({ c, shopName, authorName }) => ({
-      id: c.id,
-      setId: c.setId,
-      checkedOn: c.checkedOn,
-      odometerKm: c.odometerKm,
-      measuredBy: c.measuredBy,
-      method: c.method,
-      shopName,
-      authorName,
-      notes: c.notes,
-      readings: readingRows.filter((r) => r.checkId === c.id),
-    })),
-    service: services.map(({ s, shopName, authorName }) => ({
-      id: s.id,
-      kind: s.kind,
-      setId: s.setId,
-      performedOn: s.performedOn,
-      odometerKm: s.odometerKm,
-      costCents: s.costCents,
-      notes: s.notes,
-      shopName,
-      authorName,
-    })),
+    checks: checkPage.checks,
+    checksNextCursor: checkPage.nextCursor,
+    service: servicePage.service,
+    serviceNextCursor: servicePage.nextCursor,
     attachments: files.map((f) => ({
       id: f.id,
       kind: f.kind,
@@ -257,27 +268,135 @@ export async function getVehicleLogbook({
     })),
     odometer,
     lastOdometer: last,
-    accessLog: log.map((l) => ({ ...l, at: l.at.toISOString() })),
+    accessLog: log.map((l) => ({ ...l, at: l.at.toISOString(), lastAt: l.lastAt?.toISOString() ?? null })),
     caution: CAUTION,
   };
 }
 
+function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {
+  const out = new Map<string, T[]>();
+  for (const r of rows) {
+    const k = key(r);
+    const list = out.get(k);
+    if (list) list.push(r);
+    else out.set(k, [r]);
+  }
+  return out;
+}
+
+/**
+ * A page of a vehicle's tread checks with their readings, newest first
+ * (check date, then entry time, then id). Callers authorise first.
+ */
+export async function pageChecks({ vehicleId, setId, cursor, limit = HISTORY_PAGE }: { vehicleId: string; setId?: string; cursor?: string | null; limit?: number }): Promise<{ checks: CheckView[]; nextCursor: string | null }> {
+  const after = decodeCursor(cursor, historyCursor);
+  const c = after ? new Date(after.c) : null;
+  if (c && Number.isNaN(c.getTime())) throw badCursor();
+  const rows = await db
+    .select({ c: treadCheck, shopName: organization.name, authorName: user.name })
+    .from(treadCheck)
+    .leftJoin(organization, eq(treadCheck.shopId, organization.id))
+    .leftJoin(user, eq(treadCheck.authorUserId, user.id))
+    .where(
+      and(
+        eq(treadCheck.vehicleId, vehicleId),
+        setId ? eq(treadCheck.setId, setId) : undefined,
+        after && c
+          ? sql`(${treadCheck.checkedOn}, ${treadCheck.createdAt}, ${treadCheck.id}) < (${after.t}::date, ${c.toISOString()}::timestamptz, ${after.id}::uuid)`
+          : undefined,
+      ),
+    )
+    .orderBy(desc(treadCheck.checkedOn), desc(treadCheck.createdAt), desc(treadCheck.id))
+    .limit(limit + 1);
+  const page = rows.slice(0, limit);
+  const readings = page.length
+    ? await db
+        .select({ r: treadReading, checkedOn: treadCheck.checkedOn, odometerKm: treadCheck.odometerKm })
+        .from(treadReading)
+        .innerJoin(treadCheck, eq(treadReading.checkId, treadCheck.id))
+        .where(inArray(treadReading.checkId, page.map((p) => p.c.id)))
+    : [];
+  const byCheck = groupBy(readings.map(toReadingRow), (r) => r.checkId);
+  const lastRow = page.at(-1);
+  return {
+    checks: page.map(({ c: k, shopName, authorName }) => ({
+      id: k.id,
+      setId: k.setId,
+      checkedOn: k.checkedOn,
+      odometerKm: k.odometerKm,
+      measuredBy: k.measuredBy,
+      method: k.method,
+      shopName,
+      authorName,
+      notes: k.notes,
+      readings: byCheck.get(k.id) ?? [],
+    })),
+    nextCursor: rows.length > limit && lastRow ? encodeCursor({ t: lastRow.c.checkedOn, c: lastRow.c.createdAt.toISOString(), id: lastRow.c.id }) : null,
+  };
+}
+
+/** A page of a vehicle's service entries, newest first. Callers authorise first. */
+export async function pageService({ vehicleId, cursor, limit = HISTORY_PAGE }: { vehicleId: string; cursor?: string | null; limit?: number }): Promise<{ service: ServiceView[]; nextCursor: string | null }> {
+  const after = decodeCursor(cursor, historyCursor);
+  const c = after ? new Date(after.c) : null;
+  if (c && Number.isNaN(c.getTime())) throw badCursor();
+  const rows = await db
+    .select({ s: serviceEntry, shopName: organization.name, authorName: user.name })
+    .from(serviceEntry)
+    .leftJoin(organization, eq(serviceEntry.shopId, organization.id))
+    .leftJoin(user, eq(serviceEntry.authorUserId, user.id))
+    .where(
+      and(
+        eq(serviceEntry.vehicleId, vehicleId),
+        after && c
+          ? sql`(${serviceEntry.performedOn}, ${serviceEntry.createdAt}, ${serviceEntry.id}) < (${after.t}::date, ${c.toISOString()}::timestamptz, ${after.id}::uuid)`
+          : undefined,
+      ),
+    )
+    .orderBy(desc(serviceEntry.performedOn), desc(serviceEntry.createdAt), desc(serviceEntry.id))
+    .limit(limit + 1);
+  const page = rows.slice(0, limit);
+  const lastRow = page.at(-1);
+  return {
+    service: page.map(({ s, shopName, authorName }) => ({
+      id: s.id,
+      kind: s.kind,
+      setId: s.setId,
+      performedOn: s.performedOn,
+      odometerKm: s.odometerKm,
+      costCents: s.costCents,
+      notes: s.notes,
+      shopName,
+      authorName,
+    })),
+    nextCursor: rows.length > limit && lastRow ? encodeCursor({ t: lastRow.s.performedOn, c: lastRow.s.createdAt.toISOString(), id: lastRow.s.id }) : null,
+  };
+}
+
+const badCursor = () => new AppError("invalid", "The page cursor is not valid. Start again from the first page.", { cursor: ["Not a cursor of this list."] });
+
 const POSITION_ORDER = { front_left: 0, front_right: 1, rear_left: 2, rear_right: 3, spare: 4 } as const;
 const STATE_ORDER = { mounted: 0, stored: 1, retired: 2 } as const;
 
-/** One set with its vehicle's summary; the set page's data. */
+/** One set with its vehicle's summary; the set page's data. Loads and computes that set only. */
 export async function getSetDetail({ access, setId, today }: { access: LogbookAccess; setId: string; today: string }) {
   const vehicleId = await vehicleIdOfSet({ setId });
-  const book = await getVehicleLogbook({ access, vehicleId, today, action: "read_set" });
+  const book = await getVehicleLogbook({ access, vehicleId, today, action: "read_set", setId, includeRetired: true });
   const set = book.sets.find((s) => s.id === setId);
   if (!set) throw notFound("That set");
+  const others = await db
+    .select({ id: tireSet.id, label: tireSet.label, kind: tireSet.kind, state: tireSet.state })
+    .from(tireSet)
+    .where(and(eq(tireSet.vehicleId, vehicleId), ne(tireSet.id, setId), ne(tireSet.state, "retired")))
+    .orderBy(asc(tireSet.createdAt));
   return {
     vehicle: { id: book.vehicle.id, nickname: book.vehicle.nickname, make: book.vehicle.make, model: book.vehicle.model, odometerUnit: book.vehicle.odometerUnit },
     viewer: book.viewer,
     set,
-    otherSets: book.sets.filter((s) => s.id !== setId && s.state !== "retired").map((s) => ({ id: s.id, label: s.label, kind: s.kind, state: s.state })),
-    checks: book.checks.filter((c) => c.setId === setId),
-    attachments: book.attachments.filter((a) => a.setId === setId),
+    otherSets: others.sort((a, b) => STATE_ORDER[a.state] - STATE_ORDER[b.state]),
+    checks: book.checks,
+    checksNextCursor: book.checksNextCursor,
+    attachments: book.attachments,
     lastOdometer: book.lastOdometer,
     caution: book.caution,
   };
@@ -300,33 +419,35 @@ export type VehicleSummary = {
 /** The signed-in driver's own vehicles, each with its mounted set's condition, next reminder and last check. */
 export async function listVehicleSummaries({ userId, today }: { userId: string; today: string }): Promise<{ vehicles: VehicleSummary[]; prefs: Prefs; caution: string }> {
   const prefs = await driverPrefs({ userId });
-  const vehicles = await db.select().from(vehicle).where(eq(vehicle.ownerId, userId)).orderBy(asc(vehicle.createdAt));
-  if (vehicles.length === 0) return { vehicles: [], prefs, caution: CAUTION };
-  const ids = vehicles.map((v) => v.id);
-  const [sets, tires, readings, lastChecks, reminders] = await Promise.all([
-    db.select().from(tireSet).where(and(inArray(tireSet.vehicleId, ids), inArray(tireSet.state, ["mounted", "stored"]))),
-    db.select({ t: tire }).from(tire).innerJoin(tireSet, eq(tire.setId, tireSet.id)).where(inArray(tireSet.vehicleId, ids)),
-    db
-      .select({ r: treadReading, checkedOn: treadCheck.checkedOn, odometerKm: treadCheck.odometerKm })
-      .from(treadReading)
-      .innerJoin(treadCheck, eq(treadReading.checkId, treadCheck.id))
-      .where(inArray(treadCheck.vehicleId, ids)),
+  // The whole logbook once: the conditions and the reminders are computed from the same rows.
+  const rows = await loadLogbookRows({ ownerId: userId });
+  if (rows.vehicles.length === 0) return { vehicles: [], prefs, caution: CAUTION };
+  const ids = rows.vehicles.map((v) => v.id);
+  const [vehicles, lastChecks, reminders] = await Promise.all([
+    db.select().from(vehicle).where(eq(vehicle.ownerId, userId)).orderBy(asc(vehicle.createdAt)),
     db
       .selectDistinctOn([treadCheck.vehicleId], { vehicleId: treadCheck.vehicleId, date: treadCheck.checkedOn, odometerKm: treadCheck.odometerKm })
       .from(treadCheck)
       .where(inArray(treadCheck.vehicleId, ids))
       .orderBy(treadCheck.vehicleId, desc(treadCheck.checkedOn), desc(treadCheck.createdAt)),
     // The same items, settings and plan as the reminders page and the feed.
-    remindersFor({ userId, today }),
+    remindersFor({ userId, today, logbook: toLogbookInput(rows) }),
   ]);
   const items = reminders?.items ?? [];
-  const rows: ReadingRow[] = readings.map(toReadingRow);
+  const sets = rows.sets.filter((s) => s.state !== "retired");
+  const readingsByTire = new Map<string, ReadingRow[]>();
+  for (const r of rows.readings) {
+    const list = readingsByTire.get(r.tireId);
+    if (list) list.push(r);
+    else readingsByTire.set(r.tireId, [r]);
+  }
 
   const condOf = (s: typeof tireSet.$inferSelect) => {
     const limit = limitFor(s, prefs.jurisdiction, today);
-    const views = tires
+    // The overview shows conditions only: no wear projection.
+    const views = rows.tires
       .filter((t) => t.t.setId === s.id)
-      .map((t) => tireView({ tire: t.t, set: s, readings: rows, limitMm: limit.minMm, odometerHistory: [], today }));
+      .map((t) => tireView({ tire: t.t, set: s, readings: readingsByTire.get(t.t.id) ?? [], limitMm: limit.minMm, odometerHistory: [], project: false, today }));
     return setCondition(views);
   };
 

@@ -4,7 +4,8 @@ import "server-only";
 // extend and revoke (the driver who owns the pass), who may use one (a member
 // of the pass's shop, while it has started, has not ended and is not
 // revoked), and what each side sees. The clock is always passed in.
-import { and, asc, desc, eq, gt, inArray, isNotNull, isNull, lte, or, sql } from "drizzle-orm";
+import { and, asc, desc, eq, gt, inArray, isNotNull, isNull, lt, lte, or, sql } from "drizzle-orm";
+import { z } from "zod";
 import { createElement } from "react";
 import { db } from "@/db";
 import { accessLog, member, organization, serviceEntry, shopPass, shopPassVehicle, treadCheck, user, vehicle } from "@/db/schema";
@@ -18,6 +19,7 @@ import type { Session } from "@/lib/auth/session";
 import { sendEmail } from "@/lib/email/send";
 import { appUrl } from "@/lib/env";
 import { AppError, forbidden, notFound } from "@/lib/errors";
+import { decodeCursor, DEFAULT_PAGE, encodeCursor, timeIdCursor } from "@/lib/api/cursor";
 import {
   durationMs,
   MAX_PASS_DAYS,
@@ -111,32 +113,80 @@ export type ShopPassRow = {
   vehicles: { id: string; nickname: string; make: string; model: string; year: number | null }[];
 };
 
+const shopPassCursor = z.object({ s: z.enum(["open", "ended"]), t: z.string().min(1).max(40), id: z.string().uuid() });
+
 /**
- * The passes the user's shops hold: active ones first, soonest to end first;
- * ended or revoked ones for ENDED_VISIBLE_MS after they stopped, then gone.
+ * The passes the user's shops hold, a page at a time: open ones first,
+ * soonest to end first; then ended or revoked ones, most recently ended
+ * first, for ENDED_VISIBLE_MS after they stopped, then gone. Both parts read
+ * the (shop_id, ended_at) index.
  */
-export async function listShopPasses({ session, shopId, now }: { session: Session | null; shopId?: string; now: Date }): Promise<ShopPassRow[]> {
+export async function pageShopPasses({
+  session,
+  shopId,
+  now,
+  cursor,
+  limit = DEFAULT_PAGE,
+}: {
+  session: Session | null;
+  shopId?: string;
+  now: Date;
+  cursor?: string | null;
+  limit?: number;
+}): Promise<{ passes: ShopPassRow[]; nextCursor: string | null }> {
   const s = requireSession(session);
+  const after = decodeCursor(cursor, shopPassCursor);
   const shops = await membershipsOf({ userId: s.user.id });
   const shopIds = shopId ? shops.filter((m) => m.shopId === shopId).map((m) => m.shopId) : shops.map((m) => m.shopId);
   if (shopId && shopIds.length === 0) throw notFound("That shop");
-  if (shopIds.length === 0) return [];
+  if (shopIds.length === 0) return { passes: [], nextCursor: null };
   const cutoff = new Date(now.getTime() - ENDED_VISIBLE_MS);
-  const rows = await db
-    .select({ pass: shopPass, shopName: organization.name, driverName: user.name })
-    .from(shopPass)
-    .innerJoin(organization, eq(organization.id, shopPass.shopId))
-    .innerJoin(user, eq(user.id, shopPass.driverId))
-    .where(
-      and(
-        inArray(shopPass.shopId, shopIds),
-        // Still visible: not yet ended, or ended (by time or by revocation) after the cutoff.
-        gt(sql`least(${shopPass.endsAt}, coalesce(${shopPass.revokedAt}, ${shopPass.endsAt}))`, cutoff),
-      ),
-    )
-    .orderBy(asc(shopPass.endsAt));
-  const vehicles = await passVehicles(rows.map((r) => r.pass.id));
-  const out = rows.map(({ pass, shopName, driverName }): ShopPassRow => {
+  const select = () =>
+    db
+      .select({ pass: shopPass, shopName: organization.name, driverName: user.name })
+      .from(shopPass)
+      .innerJoin(organization, eq(organization.id, shopPass.shopId))
+      .innerJoin(user, eq(user.id, shopPass.driverId));
+
+  const rows: Awaited<ReturnType<ReturnType<typeof select>["where"]>> = [];
+  if (!after || after.s === "open") {
+    const t = after ? new Date(after.t) : null;
+    rows.push(
+      ...(await select()
+        .where(
+          and(
+            inArray(shopPass.shopId, shopIds),
+            gt(shopPass.endedAt, now),
+            t ? or(gt(shopPass.endedAt, t), and(eq(shopPass.endedAt, t), gt(shopPass.id, after!.id))) : undefined,
+          ),
+        )
+        .orderBy(asc(shopPass.endedAt), asc(shopPass.id))
+        .limit(limit + 1)),
+    );
+  }
+  if (rows.length <= limit) {
+    const t = after?.s === "ended" ? new Date(after.t) : null;
+    rows.push(
+      ...(await select()
+        .where(
+          and(
+            inArray(shopPass.shopId, shopIds),
+            // Still visible: ended (by time or by revocation) after the cutoff.
+            gt(shopPass.endedAt, cutoff),
+            lte(shopPass.endedAt, now),
+            t ? or(lt(shopPass.endedAt, t), and(eq(shopPass.endedAt, t), lt(shopPass.id, after!.id))) : undefined,
+          ),
+        )
+        .orderBy(desc(shopPass.endedAt), desc(shopPass.id))
+        .limit(limit + 1 - rows.length)),
+    );
+  }
+  const page = rows.slice(0, limit);
+  const last = page.at(-1);
+  const nextCursor =
+    rows.length > limit && last ? encodeCursor({ s: last.pass.endedAt > now ? "open" : "ended", t: last.pass.endedAt.toISOString(), id: last.pass.id }) : null;
+  const vehicles = await passVehicles(page.map((r) => r.pass.id));
+  const passes = page.map(({ pass, shopName, driverName }): ShopPassRow => {
     const state = passState(pass, now);
     return {
       id: pass.id,
@@ -153,8 +203,12 @@ export async function listShopPasses({ session, shopId, now }: { session: Sessio
       vehicles: vehicles.get(pass.id) ?? [],
     };
   });
-  const rank = (st: PassState) => (st === "active" ? 0 : st === "scheduled" ? 1 : 2);
-  return out.sort((a, b) => rank(a.state) - rank(b.state) || (a.state === "active" ? a.msLeft - b.msLeft : b.endedAt.getTime() - a.endedAt.getTime()));
+  return { passes, nextCursor };
+}
+
+/** The first page of the shop's passes (see pageShopPasses). */
+export async function listShopPasses(args: { session: Session | null; shopId?: string; now: Date; limit?: number }): Promise<ShopPassRow[]> {
+  return (await pageShopPasses(args)).passes;
 }
 
 /**
@@ -363,19 +417,25 @@ export async function listPassableVehicles({ session }: { session: Session | nul
 }
 
 /**
- * Who opened what under a pass, newest first. Only the vehicle's owner reads
- * it: a pass holder is refused (the log is the driver's view of the shop).
+ * Who opened what under a pass, newest first, a page at a time. Only the
+ * vehicle's owner reads it: a pass holder is refused (the log is the
+ * driver's view of the shop). Reads of one visit are one row with a count.
  */
-export async function listAccessLog({ access, vehicleId, limit = 200 }: { access: LogbookAccess; vehicleId?: string; limit?: number }) {
+export async function pageAccessLog({ access, vehicleId, cursor, limit = DEFAULT_PAGE }: { access: LogbookAccess; vehicleId?: string; cursor?: string | null; limit?: number }) {
   if (access.kind !== "owner") throw forbidden("The access log is the driver's to read.");
+  const after = decodeCursor(cursor, timeIdCursor);
   if (vehicleId) await assertVehicleAccess(access, { vehicleId, action: "read_access_log" });
-  return db
+  const t = after ? new Date(after.t) : null;
+  if (t && Number.isNaN(t.getTime())) throw new AppError("invalid", "The page cursor is not valid. Start again from the first page.", { cursor: ["Not a cursor of this list."] });
+  const rows = await db
     .select({
       id: accessLog.id,
       at: accessLog.at,
       action: accessLog.action,
       detail: accessLog.detail,
       actorName: accessLog.actorName,
+      count: accessLog.count,
+      lastAt: accessLog.lastAt,
       shopName: sql<string>`coalesce(${organization.name}, ${accessLog.shopName}, 'A closed shop')`,
       passId: accessLog.passId,
       vehicleId: accessLog.vehicleId,
@@ -384,9 +444,23 @@ export async function listAccessLog({ access, vehicleId, limit = 200 }: { access
     .from(accessLog)
     .innerJoin(vehicle, eq(vehicle.id, accessLog.vehicleId))
     .leftJoin(organization, eq(organization.id, accessLog.shopId))
-    .where(and(eq(vehicle.ownerId, access.userId), vehicleId ? eq(accessLog.vehicleId, vehicleId) : undefined))
-    .orderBy(desc(accessLog.at))
-    .limit(limit);
+    .where(
+      and(
+        eq(vehicle.ownerId, access.userId),
+        vehicleId ? eq(accessLog.vehicleId, vehicleId) : undefined,
+        t ? or(lt(accessLog.at, t), and(eq(accessLog.at, t), lt(accessLog.id, after!.id))) : undefined,
+      ),
+    )
+    .orderBy(desc(accessLog.at), desc(accessLog.id))
+    .limit(limit + 1);
+  const entries = rows.slice(0, limit);
+  const last = entries.at(-1);
+  return { entries, nextCursor: rows.length > limit && last ? encodeCursor({ t: last.at.toISOString(), id: last.id }) : null };
+}
+
+/** The newest access-log rows (see pageAccessLog). */
+export async function listAccessLog(args: { access: LogbookAccess; vehicleId?: string; limit?: number }) {
+  return (await pageAccessLog(args)).entries;
 }
 
 // ---------------------------------------------------------------------------

@@ -8,7 +8,7 @@ import { driverProfile, emailOptOut, reminderDelivery, reminderFeed, user } from
 import { loadLogbookInput } from "@/db/queries/logbook-input";
 import { planAllowsKind, type Plan } from "@/lib/plan";
 import { hashFeedToken, newFeedToken } from "@/lib/reminders/token";
-import { computeReminders, JURISDICTIONS, type Jurisdiction, type ReminderItem, type Skipped } from "@/lib/tires";
+import { computeReminders, JURISDICTIONS, type Jurisdiction, type LogbookInput, type ReminderItem, type Skipped } from "@/lib/tires";
 import { parseStoredSettings, type StoredReminderSettings } from "@/lib/validation/reminders";
 
 export type ReminderProfile = {
@@ -52,14 +52,15 @@ export type DriverReminders = { profile: ReminderProfile; items: ReminderItem[];
  * The driver's coming reminders in date order: the core's computation over
  * their whole logbook, narrowed to the kinds they chose and their plan allows.
  */
-export async function remindersFor({ userId, today }: { userId: string; today: string }): Promise<DriverReminders | null> {
+export async function remindersFor({ userId, today, logbook }: { userId: string; today: string; logbook?: LogbookInput }): Promise<DriverReminders | null> {
   const profile = await reminderProfile({ userId });
   if (!profile) return null;
-  return { profile, ...(await computeFor({ profile, today })) };
+  return { profile, ...(await computeFor({ profile, today, logbook })) };
 }
 
-export async function computeFor({ profile, today }: { profile: ReminderProfile; today: string }) {
-  const logbook = await loadLogbookInput({ ownerId: profile.userId });
+/** `logbook`: the driver's whole logbook when the caller loaded it already (the overview). */
+export async function computeFor({ profile, today, logbook: loaded }: { profile: ReminderProfile; today: string; logbook?: LogbookInput }) {
+  const logbook = loaded ?? (await loadLogbookInput({ ownerId: profile.userId }));
   const s = profile.settings;
   const result = computeReminders(
     logbook,
@@ -123,16 +124,48 @@ export async function revokeFeed({ userId }: { userId: string }): Promise<void> 
   await db.update(reminderFeed).set({ revokedAt: new Date() }).where(and(eq(reminderFeed.userId, userId), isNull(reminderFeed.revokedAt)));
 }
 
-/** The driver a live feed secret stands for, or null; records the fetch. */
-export async function userForFeedToken({ token }: { token: string }): Promise<string | null> {
+/** How stale the feed's "a calendar app last read it" may be: one write per hour at most, not one per poll. */
+export const FEED_FETCH_STAMP_MS = 60 * 60 * 1000;
+
+export type LiveFeed = { id: string; userId: string; contentTag: string | null; contentChangedAt: Date | null };
+
+/** The live feed a secret stands for, or null. Notes the fetch at most once per FEED_FETCH_STAMP_MS. */
+export async function feedForToken({ token, now = new Date() }: { token: string; now?: Date }): Promise<LiveFeed | null> {
   const [row] = await db
-    .update(reminderFeed)
-    .set({ lastFetchedAt: new Date() })
+    .select({
+      id: reminderFeed.id,
+      userId: reminderFeed.userId,
+      lastFetchedAt: reminderFeed.lastFetchedAt,
+      contentTag: reminderFeed.contentTag,
+      contentChangedAt: reminderFeed.contentChangedAt,
+      banned: user.banned,
+    })
+    .from(reminderFeed)
+    .innerJoin(user, eq(user.id, reminderFeed.userId))
     .where(and(eq(reminderFeed.tokenHash, hashFeedToken(token)), isNull(reminderFeed.revokedAt)))
-    .returning({ userId: reminderFeed.userId });
-  if (!row) return null;
-  const [u] = await db.select({ banned: user.banned }).from(user).where(eq(user.id, row.userId)).limit(1);
-  return u && !u.banned ? row.userId : null;
+    .limit(1);
+  if (!row || row.banned) return null;
+  if (!row.lastFetchedAt || now.getTime() - row.lastFetchedAt.getTime() >= FEED_FETCH_STAMP_MS) {
+    await db.update(reminderFeed).set({ lastFetchedAt: now }).where(eq(reminderFeed.id, row.id));
+  }
+  return { id: row.id, userId: row.userId, contentTag: row.contentTag, contentChangedAt: row.contentChangedAt };
+}
+
+/** The driver a live feed secret stands for, or null. */
+export async function userForFeedToken({ token }: { token: string }): Promise<string | null> {
+  return (await feedForToken({ token }))?.userId ?? null;
+}
+
+/**
+ * Records what the feed now serves. Returns when that content first appeared:
+ * unchanged content keeps its old time (and writes nothing).
+ */
+export async function noteFeedContent({ feed, tag, now }: { feed: LiveFeed; tag: string; now: Date }): Promise<Date> {
+  if (feed.contentTag === tag && feed.contentChangedAt) return feed.contentChangedAt;
+  // Whole seconds: HTTP dates carry no fractions, and If-Modified-Since compares them.
+  const at = new Date(Math.floor(now.getTime() / 1000) * 1000);
+  await db.update(reminderFeed).set({ contentTag: tag, contentChangedAt: at }).where(eq(reminderFeed.id, feed.id));
+  return at;
 }
 
 // ---- e-mail deliveries -------------------------------------------------

@@ -119,5 +119,10 @@ export const invitation = pgTable(
       .notNull()
       .references(() => user.id, { onDelete: "cascade" }),
   },
-  (t) => [index("invitation_organization_id_idx").on(t.organizationId), index("invitation_email_idx").on(t.email)],
+  (t) => [
+    index("invitation_organization_id_idx").on(t.organizationId),
+    index("invitation_email_idx").on(t.email),
+    // Deleting a user cascades to the invitations they sent.
+    index("invitation_inviter_id_idx").on(t.inviterId),
+  ],
 );

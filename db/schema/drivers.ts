@@ -37,7 +37,12 @@ export const reminderFeed = pgTable(
     tokenHash: text("token_hash").notNull().unique(),
     createdAt: tz("created_at").notNull().defaultNow(),
     revokedAt: tz("revoked_at"),
+    // Written at most once per FEED_FETCH_STAMP_MS, not on every calendar poll.
     lastFetchedAt: tz("last_fetched_at"),
+    // A hash of what the feed last served and when that content changed:
+    // the ETag and Last-Modified of the feed, written only when it changes.
+    contentTag: text("content_tag"),
+    contentChangedAt: tz("content_changed_at"),
   },
   (t) => [index("reminder_feed_user_idx").on(t.userId)],
 );

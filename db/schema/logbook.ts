@@ -99,7 +99,11 @@ export const tireSet = pgTable(
     createdAt: tz("created_at").notNull().defaultNow(),
     updatedAt: tz("updated_at").notNull().defaultNow(),
   },
-  (t) => [index("tire_set_vehicle_idx").on(t.vehicleId), index("tire_set_state_idx").on(t.vehicleId, t.state)],
+  (t) => [
+    index("tire_set_vehicle_idx").on(t.vehicleId),
+    index("tire_set_state_idx").on(t.vehicleId, t.state),
+    index("tire_set_fitted_by_shop_idx").on(t.fittedByShopId),
+  ],
 );
 
 export const tire = pgTable(
@@ -140,7 +144,13 @@ export const serviceEntry = pgTable(
     passId: uuid("pass_id"),
     createdAt: tz("created_at").notNull().defaultNow(),
   },
-  (t) => [index("service_entry_vehicle_idx").on(t.vehicleId, t.performedOn), index("service_entry_shop_idx").on(t.shopId)],
+  (t) => [
+    index("service_entry_vehicle_idx").on(t.vehicleId, t.performedOn),
+    index("service_entry_shop_idx").on(t.shopId),
+    index("service_entry_set_idx").on(t.setId),
+    index("service_entry_pass_idx").on(t.passId),
+    index("service_entry_author_idx").on(t.authorUserId),
+  ],
 );
 
 export const treadCheck = pgTable(
@@ -164,7 +174,14 @@ export const treadCheck = pgTable(
     notes: text("notes"),
     createdAt: tz("created_at").notNull().defaultNow(),
   },
-  (t) => [index("tread_check_vehicle_idx").on(t.vehicleId, t.checkedOn), index("tread_check_set_idx").on(t.setId)],
+  (t) => [
+    index("tread_check_vehicle_idx").on(t.vehicleId, t.checkedOn),
+    index("tread_check_set_idx").on(t.setId),
+    index("tread_check_pass_idx").on(t.passId),
+    index("tread_check_service_entry_idx").on(t.serviceEntryId),
+    index("tread_check_shop_idx").on(t.shopId),
+    index("tread_check_author_idx").on(t.authorUserId),
+  ],
 );
 
 export const treadReading = pgTable(
@@ -211,6 +228,8 @@ export const attachment = pgTable(
     index("attachment_vehicle_idx").on(t.vehicleId),
     index("attachment_set_idx").on(t.setId),
     index("attachment_service_idx").on(t.serviceEntryId),
+    index("attachment_owner_idx").on(t.ownerId),
+    index("attachment_uploaded_by_idx").on(t.uploadedByUserId),
   ],
 );
 

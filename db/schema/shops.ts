@@ -1,5 +1,6 @@
 // Shops (better-auth organizations) and the passes drivers give them.
-import { index, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import { index, integer, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { organization, user } from "./auth";
 import { vehicle } from "./logbook";
 
@@ -43,10 +44,19 @@ export const shopPass = pgTable(
     // Set once the "pass ended" e-mail went out, so it goes out once.
     endNoticeSentAt: tz("end_notice_sent_at"),
     createdAt: tz("created_at").notNull().defaultNow(),
+    // When the pass stopped or will stop: its end, or its revocation if
+    // earlier. Stored (and indexed with the shop) so the shop's "still
+    // visible" filter is an index range, not a computation over every pass.
+    endedAt: tz("ended_at")
+      .notNull()
+      .generatedAlwaysAs(sql`least(ends_at, coalesce(revoked_at, ends_at))`),
   },
   (t) => [
-    index("shop_pass_driver_idx").on(t.driverId),
+    index("shop_pass_driver_idx").on(t.driverId, t.createdAt),
     index("shop_pass_shop_idx").on(t.shopId, t.endsAt),
+    index("shop_pass_shop_ended_idx").on(t.shopId, t.endedAt),
+    // The daily "pass ended" notices look only at passes without one.
+    index("shop_pass_notice_due_idx").on(t.endsAt).where(sql`end_notice_sent_at is null`),
   ],
 );
 
@@ -63,7 +73,12 @@ export const shopPassVehicle = pgTable(
   (t) => [primaryKey({ columns: [t.passId, t.vehicleId] }), index("shop_pass_vehicle_vehicle_idx").on(t.vehicleId)],
 );
 
-/** Every read and write under a pass, shown to the driver. */
+/**
+ * Every read and write under a pass, shown to the driver. A write is a row of
+ * its own; reads are counted into one row per pass, vehicle, person and
+ * action per visit window (`visitStart`, see ACCESS_VISIT_MS), so a
+ * technician paging through a logbook does not add a row per request.
+ */
 export const accessLog = pgTable(
   "access_log",
   {
@@ -82,8 +97,19 @@ export const accessLog = pgTable(
     action: text("action").notNull(),
     detail: text("detail"),
     at: tz("at").notNull().defaultNow(),
+    // Reads only: the start of the visit window, how many reads it holds and the last one.
+    visitStart: tz("visit_start"),
+    count: integer("count").notNull().default(1),
+    lastAt: tz("last_at"),
   },
-  (t) => [index("access_log_vehicle_idx").on(t.vehicleId, t.at), index("access_log_pass_idx").on(t.passId)],
+  (t) => [
+    index("access_log_vehicle_idx").on(t.vehicleId, t.at),
+    index("access_log_pass_idx").on(t.passId, t.at),
+    index("access_log_shop_idx").on(t.shopId),
+    index("access_log_actor_idx").on(t.actorUserId),
+    // NULLs are distinct: writes (no visit_start) never collide.
+    uniqueIndex("access_log_visit_uq").on(t.passId, t.vehicleId, t.actorUserId, t.action, t.visitStart),
+  ],
 );
 
 export type ShopPass = typeof shopPass.$inferSelect;

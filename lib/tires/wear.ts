@@ -86,6 +86,12 @@ export type ProjectWearOptions = {
   limitMm: number;
   today: string;
   odometerHistory?: readonly OdometerEntry[];
+  /**
+   * The vehicle's distance per day, when the caller already computed it once
+   * for all its tires (distancePerDay of the vehicle's history). Replaces the
+   * rate from `odometerHistory` and the tire's own readings.
+   */
+  kmPerDay?: number;
   typicalWearMmPerKm?: number;
 };
 
@@ -156,9 +162,12 @@ export function projectWear(
   // Capped so a near-zero wear rate cannot produce Infinity.
   const projectedOdometerKm = alreadyAtLimit ? maxOdo : maxOdo + Math.min((startDepth - limitMm) / rate, 1e9);
 
-  const history = [...(opts.odometerHistory ?? []), ...usable.map((x) => ({ date: x.r.date, odometerKm: x.r.odometerKm }))];
-  const distance = distancePerDay(history.filter((h) => (toDayNumber(h?.date) ?? Infinity) <= today));
-  const kmPerDay = distance.kmPerDay;
+  let kmPerDay: number;
+  if (finite(opts.kmPerDay) && opts.kmPerDay >= 0) kmPerDay = opts.kmPerDay;
+  else {
+    const history = [...(opts.odometerHistory ?? []), ...usable.map((x) => ({ date: x.r.date, odometerKm: x.r.odometerKm }))];
+    kmPerDay = distancePerDay(history.filter((h) => (toDayNumber(h?.date) ?? Infinity) <= today)).kmPerDay;
+  }
   let projectedDate: string | null = null;
   if (alreadyAtLimit) projectedDate = fromDayNumber(lastDay);
   else if (kmPerDay > 0) {

@@ -5,7 +5,7 @@ import { PassStateBadge } from "@/components/passes/pass-state-badge";
 import { TimeLeft } from "@/components/passes/time-left";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
-import { listShopPasses, listShopWork } from "@/db/queries/passes";
+import { listShopWork, pageShopPasses } from "@/db/queries/passes";
 import { membershipsOf, requireSession } from "@/lib/auth/roles";
 import { getSession } from "@/lib/auth/session";
 import { cn } from "@/lib/cn";
@@ -14,12 +14,20 @@ import { SCOPE_LABEL } from "@/lib/validation/passes";
 
 export const dynamic = "force-dynamic";
 
-export default async function ShopHomePage() {
+/** Passes on one page; a busy shop pages on with "More passes". */
+const PASSES_PER_PAGE = 40;
+
+export default async function ShopHomePage({ searchParams }: { searchParams: Promise<{ after?: string }> }) {
   const session = requireSession(await getSession());
   const now = new Date();
+  const { after } = await searchParams;
   const shops = await membershipsOf({ userId: session.user.id });
   const shop = shops[0];
-  const [passes, work] = shop ? await Promise.all([listShopPasses({ session, now }), listShopWork({ session, shopId: shop.shopId, limit: 20 })]) : [[], []];
+  // A stale or edited cursor starts again from the first page rather than failing.
+  const page = (cursor: string | undefined) => pageShopPasses({ session, now, cursor, limit: PASSES_PER_PAGE });
+  const [{ passes, nextCursor }, work] = shop
+    ? await Promise.all([page(after).catch(() => page(undefined)), listShopWork({ session, shopId: shop.shopId, limit: 20 })])
+    : [{ passes: [], nextCursor: null }, []];
   const active = passes.filter((p) => p.state === "active");
   const ended = passes.filter((p) => p.state !== "active");
 
@@ -29,7 +37,7 @@ export default async function ShopHomePage() {
         title={`Passes at ${shop?.shopName ?? "your shop"}`}
         description="Logbooks that drivers have shared with the shop, for as long as each pass lasts."
       />
-      {active.length === 0 ? <p className="mb-6 text-lg text-asphalt-700">No open passes right now. When a driver gives the shop a pass, it shows here and the staff get an e-mail.</p> : null}
+      {active.length === 0 && !after ? <p className="mb-6 text-lg text-asphalt-700">No open passes right now. When a driver gives the shop a pass, it shows here and the staff get an e-mail.</p> : null}
       <ul className="grid gap-3 md:grid-cols-2" aria-label="Open passes">
         {active.map((p) => (
           <li key={p.id}>
@@ -78,6 +86,25 @@ export default async function ShopHomePage() {
             ))}
           </ul>
         </section>
+      ) : null}
+
+      {nextCursor || after ? (
+        <nav aria-label="More passes" className="mt-6 flex flex-wrap gap-3">
+          {after ? (
+            <Link href="/shop" className="rounded-md border-2 border-asphalt-300 bg-white px-4 py-2 font-semibold text-asphalt-900 no-underline hover:border-groove-600">
+              First passes
+            </Link>
+          ) : null}
+          {nextCursor ? (
+            <Link
+              href={`/shop?after=${encodeURIComponent(nextCursor)}`}
+              className="rounded-md border-2 border-asphalt-300 bg-white px-4 py-2 font-semibold text-asphalt-900 no-underline hover:border-groove-600"
+              data-testid="more-passes"
+            >
+              More passes
+            </Link>
+          ) : null}
+        </nav>
       ) : null}
 
       <section aria-labelledby="work" className="mt-8">

@@ -37,6 +37,23 @@ describe("wear projection", () => {
     expect(projectWear(shuffled, { limitMm: 3, today })).toEqual(projectWear(linear, { limitMm: 3, today }));
   });
 
+  it("takes a distance per day computed once for the vehicle instead of re-reading the history", () => {
+    // The same line, but the vehicle's rate is given as 100 km a day: 35,000 km left take 350 days from day 300.
+    const r = projectWear(linear, { limitMm: 3, today, kmPerDay: 100, odometerHistory: [{ date: day(0), odometerKm: 0 }] });
+    if (!r.ok) throw new Error(r.error);
+    expect(r.kmPerDay).toBe(100);
+    expect(r.projectedDate).toBe(day(650));
+    // The vehicle's rate computed by distancePerDay and handed in gives what the history gives when it holds the same points.
+    const history = linear.map((x) => ({ date: x.date, odometerKm: x.odometerKm }));
+    const once = distancePerDay(history);
+    const given = projectWear(linear, { limitMm: 3, today, kmPerDay: once.kmPerDay });
+    const computed = projectWear(linear, { limitMm: 3, today });
+    expect(given.ok && computed.ok && given.projectedDate === computed.projectedDate).toBe(true);
+    // Not a number: ignored, the history decides.
+    const ignored = projectWear(linear, { limitMm: 3, today, kmPerDay: Number.NaN });
+    expect(ignored.ok && ignored.kmPerDay).toBeCloseTo(50, 9);
+  });
+
   it("uses the odometer history for distance per day", () => {
     const two = linear.slice(0, 2);
     const history = [

@@ -1,10 +1,16 @@
 // The driver's reminder feed, for calendar apps: GET /api/feed/<secret>(.ics).
 // No session: the secret is the key. Unknown, malformed and revoked secrets
 // get the same bare 404, so the answer tells a guesser nothing.
-import { computeFor, reminderProfile, userForFeedToken } from "@/db/queries/reminders";
+// Calendar apps poll: the answer carries an ETag (a hash of what the feed
+// says) and Last-Modified (when that content first appeared), and a poll
+// whose validators still match gets 304 without a body. Nothing is written
+// per poll: the content's tag only when it changes, the fetch time hourly.
+import { createHash } from "node:crypto";
+import { computeFor, feedForToken, noteFeedContent, reminderProfile } from "@/db/queries/reminders";
 import { todayIn } from "@/lib/reminders/describe";
 import { buildFeed } from "@/lib/reminders/feed";
 import { tokenFromPath } from "@/lib/reminders/token";
+import { planAllows } from "@/lib/plan";
 import { appUrl } from "@/lib/env";
 import { clientAddress } from "@/lib/peer";
 import { hitLimit, LIMITS, RateLimitedError } from "@/lib/rate-limit";
@@ -13,6 +19,14 @@ export const dynamic = "force-dynamic";
 
 const notFound = () =>
   new Response("Not found\n", { status: 404, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });
+
+/** RFC 9110 §13.1.2: If-None-Match is a list of entity tags (or *); weak comparison. */
+function matchesAny(header: string | null, etag: string): boolean {
+  if (!header) return false;
+  if (header.trim() === "*") return true;
+  const bare = etag.replace(/^W\//, "");
+  return header.split(",").some((t) => t.trim().replace(/^W\//, "") === bare);
+}
 
 export async function GET(req: Request, ctx: { params: Promise<{ token: string }> }) {
   // Calendar apps poll a few times an hour; a guesser trying secrets is held back by its real address.
@@ -30,29 +44,52 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
   }
   const token = tokenFromPath(segment);
   if (!token) return notFound();
-  const userId = await userForFeedToken({ token });
-  if (!userId) return notFound();
   const now = new Date();
-  const profile = await reminderProfile({ userId });
+  const feed = await feedForToken({ token, now });
+  if (!feed) return notFound();
+  const profile = await reminderProfile({ userId: feed.userId });
   if (!profile) return notFound();
   // "Today" is the driver's own date: it decides what is overdue.
   const { items } = await computeFor({ profile, today: todayIn(profile.timezone, now) });
+  const baseUrl = appUrl();
+  const alarms = planAllows({ plan: profile.plan, feature: "alarms" }) ? profile.settings.alarmLeadDays : [];
+  // Everything the body is made of, except the stamp (which follows the content's time).
+  const tag = createHash("sha256")
+    .update(JSON.stringify({ v: 1, items, plan: profile.plan, timezone: profile.timezone, alarms, baseUrl }))
+    .digest("base64url")
+    .slice(0, 32);
+  const changedAt = await noteFeedContent({ feed, tag, now });
+  const etag = `"${tag}"`;
+  const validators = {
+    etag,
+    "last-modified": changedAt.toUTCString(),
+    "cache-control": "private, max-age=0, must-revalidate",
+    "referrer-policy": "no-referrer",
+    "x-robots-tag": "noindex",
+  };
+  const ifNoneMatch = req.headers.get("if-none-match");
+  const ifModifiedSince = req.headers.get("if-modified-since");
+  // RFC 9110 §13.2.2: If-None-Match decides when present; If-Modified-Since only without it.
+  const notModified = ifNoneMatch
+    ? matchesAny(ifNoneMatch, etag)
+    : ifModifiedSince != null && !Number.isNaN(Date.parse(ifModifiedSince)) && changedAt.getTime() <= Date.parse(ifModifiedSince);
+  if (notModified) return new Response(null, { status: 304, headers: validators });
+
   const body = buildFeed({
     items,
     plan: profile.plan,
     timezone: profile.timezone,
     alarmLeadDays: profile.settings.alarmLeadDays,
-    baseUrl: appUrl(),
-    now,
+    baseUrl,
+    // DTSTAMP follows the content, so the same content is the same bytes.
+    now: changedAt,
   });
   return new Response(body, {
     status: 200,
     headers: {
+      ...validators,
       "content-type": "text/calendar; charset=utf-8",
       "content-disposition": 'inline; filename="fourpatch-reminders.ics"',
-      "cache-control": "private, max-age=0, must-revalidate",
-      "referrer-policy": "no-referrer",
-      "x-robots-tag": "noindex",
     },
   });
 }

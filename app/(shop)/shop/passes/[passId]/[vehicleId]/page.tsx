@@ -32,7 +32,8 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
   let access, logbook;
   try {
     access = await resolvePassAccess({ session, passId, now });
-    logbook = await getVehicleLogbook({ access, vehicleId, today, action: "read_logbook" });
+    // The view shows the newest twelve checks and the recent work: load only those.
+    logbook = await getVehicleLogbook({ access, vehicleId, today, action: "read_logbook", historyLimit: 12 });
   } catch (err) {
     if (err instanceof AppError && err.code === "pass_ended") return <PassClosed message={err.message} />;
     if (err instanceof AppError && err.code === "not_found") notFound();
