@@ -7,6 +7,7 @@ import type { z } from "zod";
 import { sessionFromRequest, type Session } from "@/lib/auth/session";
 import { requireSession } from "@/lib/auth/roles";
 import { AppError, errorBody, toAppError } from "@/lib/errors";
+import { appUrl } from "@/lib/env";
 import { fieldErrors } from "@/lib/validation/fields";
 
 type Params = Record<string, string | string[]>;
@@ -29,7 +30,7 @@ export function route<P extends Params = Params>(
       return NextResponse.json(result ?? { ok: true });
     } catch (err) {
       const e = toAppError(err);
-      return NextResponse.json(errorBody(e), { status: e.status });
+      return NextResponse.json(errorBody(e, appUrl()), { status: e.status });
     }
   };
 }
