@@ -590,6 +590,6 @@ export async function seedPaidSubscription({ email, name, userId, interval, star
     const invoice = await addInvoice(tx, { sub, price, paid: true, reason: "subscription_create", amount: Number(price.unit_amount), periodStart: start, periodEnd: end, cardLast4: "4242" });
     sub = { ...sub, latest_invoice: invoice.id };
     await putFakeObject({ tx, object: sub });
-    return { customerId: customer.id, subscription: sub as unknown as import("stripe").Stripe.Subscription };
+    return { customerId: customer.id, subscription: sub as unknown as Stripe.Subscription };
   });
 }
