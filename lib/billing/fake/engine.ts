@@ -394,6 +394,7 @@ export async function updateSubscription(id: string, params: Record<string, unkn
     let sub = row.data as Obj;
     if (sub.status === "canceled") throw new FakeStripeError(400, { type: "invalid_request_error", message: "A canceled subscription can only update its cancellation_details and metadata." });
     const previous: Record<string, unknown> = {};
+    let charged = false;
     if (params.cancel_at_period_end !== undefined) {
       const v = params.cancel_at_period_end === "true";
       if (params.cancel_at_period_end !== "true" && params.cancel_at_period_end !== "false") throw invalid("cancel_at_period_end", "Invalid boolean");
@@ -426,10 +427,11 @@ export async function updateSubscription(id: string, params: Record<string, unkn
           const invoice = await addInvoice(tx, { sub, price, paid: !failing, reason: "subscription_update", amount, periodStart: start, periodEnd: end, cardLast4: customer?.fakeFlags.cardLast4 as string | undefined });
           sub = withItem({ ...sub, latest_invoice: invoice.id, billing_cycle_anchor: start, status: failing ? "past_due" : "active" }, { price, current_period_start: start, current_period_end: end });
           events.push(await addEvent(tx, failing ? "invoice.payment_failed" : "invoice.paid", invoice));
+          charged = true;
         }
       }
     }
-    await putFakeObject({ tx, object: sub, fakeFlags: { ...row.fakeFlags, failNextRenewal: false } });
+    await putFakeObject({ tx, object: sub, fakeFlags: charged ? { ...row.fakeFlags, failNextRenewal: false } : row.fakeFlags });
     if (Object.keys(previous).length > 0 || events.length > 0) events.unshift(await addEvent(tx, "customer.subscription.updated", sub, previous));
     return sub;
   });
