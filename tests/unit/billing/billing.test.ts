@@ -9,7 +9,7 @@ import { chargeCard, TEST_CARDS } from "@/lib/billing/fake/engine";
 import { FormError, parseStripeForm } from "@/lib/billing/fake/form";
 import { formatMoney } from "@/lib/billing/config";
 
-const { queryStringifyRequestData: stringifyRequestData } = createRequire(import.meta.url)(path.join(process.cwd(), "node_modules/stripe/cjs/utils.js")) as { stringifyRequestData: (d: unknown) => string };
+const { queryStringifyRequestData: stringifyRequestData } = createRequire(import.meta.url)(path.join(process.cwd(), "node_modules/stripe/cjs/utils.js")) as { queryStringifyRequestData: (d: unknown) => string };
 
 const now = new Date("2026-12-02T12:00:00Z");
 const later = new Date("2027-01-02T12:00:00Z");
