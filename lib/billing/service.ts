@@ -4,7 +4,7 @@ import "server-only";
 // interval, invoices. Identical with a real key and with the local fake.
 import { createHash } from "node:crypto";
 import type Stripe from "stripe";
-import { currentSubscription, customerOf, planOf, rememberCustomer, storeSubscription, userOfCustomer, type SubscriptionInput } from "@/db/queries/billing";
+import { currentSubscription, customerOf, planOf, rememberCustomer, storeSubscription, subscriptionsOf, userOfCustomer, type SubscriptionInput } from "@/db/queries/billing";
 import { db } from "@/db";
 import { user } from "@/db/schema";
 import { eq } from "drizzle-orm";
@@ -171,4 +171,12 @@ export async function invoicesOf({ userId }: { userId: string }): Promise<Invoic
       url: i.hosted_invoice_url ?? null,
     };
   });
+}
+
+/** Before an account is deleted: end its subscriptions at once, so Stripe stops charging a card nobody can manage. */
+export async function endSubscriptionsOf({ userId }: { userId: string }) {
+  for (const s of await subscriptionsOf({ userId })) {
+    if (s.status === "canceled" || s.status === "incomplete_expired") continue;
+    await viaStripe(() => stripe().subscriptions.cancel(s.stripeSubscriptionId));
+  }
 }

@@ -13,6 +13,7 @@ import { billingEvent, billingSubscription, driverProfile, fakeOutbox, fakeStrip
 import { currentSubscription, planOf, storeSubscription } from "@/db/queries/billing";
 import { POST as webhookPOST } from "@/app/api/stripe/webhook/route";
 import { PUT as settingsPUT } from "@/app/api/reminders/settings/route";
+import { DELETE as accountDELETE } from "@/app/api/account/route";
 import { FAKE_STRIPE_KEY, FAKE_WEBHOOK_SECRET } from "@/lib/billing/config";
 import { advanceToRenewal, payCheckoutSession, payInvoice, setFailNextRenewal, TEST_CARDS } from "@/lib/billing/fake/engine";
 import { invoicesOf, plusPrices, setCancelAtPeriodEnd, startCheckout, switchInterval } from "@/lib/billing/service";
@@ -239,6 +240,18 @@ describe("the subscription's life", () => {
     // Bought seconds ago, so almost the whole month is credited.
     expect(invoices[0]!.amount).toBeGreaterThanOrEqual(prices.year.amount - prices.month.amount);
     expect(invoices[0]!.amount).toBeLessThan(prices.year.amount - prices.month.amount + 5);
+  });
+});
+
+describe("deleting a paying account", () => {
+  it("ends the subscription in Stripe before the account goes", async () => {
+    const u = await signUp({ name: "Fen Wardle" });
+    await buyPlus(u);
+    const subId = (await currentSubscription({ userId: u.id }))!.stripeSubscriptionId;
+    const res = await accountDELETE(request("/api/account", { method: "DELETE", as: u, body: { confirm: "DELETE", password: "correct-horse-battery" } }), { params: Promise.resolve({}) });
+    expect(res.status).toBe(200);
+    expect((await stripe().subscriptions.retrieve(subId)).status).toBe("canceled");
+    expect(await db.select().from(billingSubscription).where(eq(billingSubscription.userId, u.id))).toHaveLength(0);
   });
 });
 
