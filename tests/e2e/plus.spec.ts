@@ -70,7 +70,7 @@ test("a Free driver buys Plus, uses it, cancels, resumes and switches to yearly"
   await expect(page).toHaveURL(/\/account\/billing\?checkout=done/);
   await expect(billing.plan()).toHaveText("Your plan: Plus");
   await expect(page.getByTestId("plan-price")).toContainText("per month");
-  await expect(page.getByText("Renews on")).toBeVisible();
+  await expect(page.getByText("Renews on", { exact: true })).toBeVisible();
   await expect(billing.invoices()).toHaveCount(1);
   await expect(billing.invoices().first()).toContainText("Paid");
   await page.screenshot({ path: `${SCREENS}/e2e-plus-billing-phone.png`, fullPage: true });
@@ -101,11 +101,11 @@ test("a Free driver buys Plus, uses it, cancels, resumes and switches to yearly"
   // Cancel at period end: asks first, then shows the end date; resume undoes it.
   await billing.open();
   await billing.cancelAtPeriodEnd();
-  await expect(page.getByText("Ends on")).toBeVisible();
+  await expect(page.getByText("Ends on", { exact: true })).toBeVisible();
   const endDate = (await page.getByTestId("plan-date").textContent())!;
   await expect(page.getByText(`Plus is cancelled and ends on ${endDate}`)).toBeVisible();
   await billing.resume();
-  await expect(page.getByText("Renews on")).toBeVisible();
+  await expect(page.getByText("Renews on", { exact: true })).toBeVisible();
 
   // Monthly → yearly: asks first, then a yearly price and a second invoice.
   await billing.switchTo("yearly");
@@ -118,7 +118,7 @@ test("a Free driver buys Plus, uses it, cancels, resumes and switches to yearly"
 
   // Cancel again and let the period end on the developer page: back to Free, settings kept.
   await billing.cancelAtPeriodEnd();
-  await expect(page.getByText("Ends on")).toBeVisible();
+  await expect(page.getByText("Ends on", { exact: true })).toBeVisible();
   await page.goto("/dev/stripe");
   const mine = page.getByTestId("fake-subscription").filter({ hasText: "maren-" });
   await mine.getByRole("button", { name: "Reach the period end" }).click();
