@@ -7,7 +7,10 @@ export async function register() {
   installPeerStamp();
   try {
     const { assertFakesConfigured } = await import("./lib/dev-fakes");
-    assertFakesConfigured([{ name: "e-mail", realKeyVar: "RESEND_API_KEY" }]);
+    assertFakesConfigured([
+      { name: "e-mail", realKeyVar: "RESEND_API_KEY" },
+      { name: "payments", realKeyVar: "STRIPE_SECRET_KEY" },
+    ]);
     const { migrateDb } = await import("./db");
     await migrateDb();
   } catch (err) {

@@ -28,6 +28,11 @@ const nextConfig = {
       { source: "/garage/:path*", destination: "/:path*", permanent: true },
     ];
   },
+  // The stripe SDK always calls <host>/v1/…; without a real key it is pointed at
+  // this server, whose local fake of the Stripe API lives under /api/fake/stripe.
+  async rewrites() {
+    return [{ source: "/v1/:path*", destination: "/api/fake/stripe/v1/:path*" }];
+  },
   experimental: {
     serverActions: { bodySizeLimit: "12mb" },
   },

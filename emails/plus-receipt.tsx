@@ -1,4 +1,4 @@
-// Template only: the payments issue sends it after a paid Plus period.
+// Sent for each paid Plus invoice (the invoice.paid webhook, lib/billing/webhook.ts).
 import { Button, Text } from "@react-email/components";
 import { EmailLayout, button, paragraph } from "./components/layout";
 

@@ -54,8 +54,9 @@ export function emailDisabled(): boolean {
   return !env().RESEND_API_KEY && process.env.FOURPATCH_DEV_FAKES !== "on";
 }
 
+/** True while the local fake stands in for Stripe: no real key, and fakes switched on explicitly (lib/dev-fakes.ts). */
 export function usingFakeStripe(): boolean {
-  return !env().STRIPE_SECRET_KEY;
+  return !env().STRIPE_SECRET_KEY && process.env.FOURPATCH_DEV_FAKES === "on";
 }
 
 /** Only for tests: forget the parsed environment after changing process.env. */

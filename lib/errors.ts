@@ -10,6 +10,7 @@ export type ErrorCode =
   | "unsupported_type"
   | "rate_limited"
   | "pass_ended"
+  | "payment_required"
   | "internal";
 
 const status: Record<ErrorCode, number> = {
@@ -22,6 +23,7 @@ const status: Record<ErrorCode, number> = {
   unsupported_type: 415,
   rate_limited: 429,
   pass_ended: 403,
+  payment_required: 402,
   internal: 500,
 };
 
@@ -56,8 +58,22 @@ export function toAppError(err: unknown): AppError {
 }
 
 /** The JSON body every API error has. */
-export type ApiErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldErrors } };
+export type ApiErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldErrors; upgradeUrl?: string } };
 
-export function errorBody(err: AppError): ApiErrorBody {
-  return { error: { code: err.code, message: err.safeMessage, ...(err.fields ? { fields: err.fields } : {}) } };
+/** Where a Free driver buys Plus; every 402 names it. */
+export const UPGRADE_PATH = "/account/billing";
+
+/** A Plus-only feature asked for on Free: 402 with the upgrade link. */
+export const plusRequired = (what: string, fields?: FieldErrors) =>
+  new AppError("payment_required", `${what} ${what.endsWith("s") ? "are" : "is"} part of Plus. Upgrade on ${UPGRADE_PATH}.`, fields);
+
+export function errorBody(err: AppError, baseUrl?: string): ApiErrorBody {
+  return {
+    error: {
+      code: err.code,
+      message: err.safeMessage,
+      ...(err.fields ? { fields: err.fields } : {}),
+      ...(err.code === "payment_required" ? { upgradeUrl: `${baseUrl ?? ""}${UPGRADE_PATH}` } : {}),
+    },
+  };
 }

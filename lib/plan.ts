@@ -1,6 +1,7 @@
-// What each plan includes. The payments issue decides who is on Plus; every
-// feature check goes through `planAllows`, so switching a driver's
-// driver_profile.plan switches the features.
+// What each plan includes. Who is on Plus comes from the stored Stripe
+// subscription (`planOf` in db/queries/billing.ts, rule in
+// lib/billing/entitlement.ts); every feature check goes through `planAllows`,
+// and route handlers answer 402 with the upgrade link (`plusRequired`).
 import type { ReminderKind } from "@/lib/tires";
 
 export type Plan = "free" | "plus";

@@ -2,6 +2,7 @@
 // Reminder settings: the same zod schema checks the form here and the
 // server action there. Plus-only choices stay visible but switched off on Free.
 import { zodResolver } from "@hookform/resolvers/zod";
+import Link from "next/link";
 import { useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
@@ -60,14 +61,20 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
         <legend className="text-sm font-semibold text-asphalt-800">Remind me about</legend>
         {REMINDER_KINDS.map((kind) => {
           const locked = PLUS_KINDS.has(kind) && !plus;
+          if (locked) {
+            // Not part of the form on Free: an upgrade prompt instead of a dead box, while the stored choice waits for Plus.
+            return (
+              <div key={kind} className="flex min-h-11 items-center gap-3 rounded border border-dashed border-asphalt-300 px-3 py-2">
+                <span className="flex-1 text-asphalt-700">{REMINDER_KIND_LABELS[kind]}</span>
+                <Link href="/account/billing" className="text-sm font-semibold">
+                  Upgrade to Plus
+                </Link>
+              </div>
+            );
+          }
           return (
             <label key={kind} className="flex min-h-11 items-center gap-3 rounded border border-asphalt-200 px-3 py-2">
-              {locked ? (
-                // Not part of the form on Free: unticked and inert, while the stored choice waits for Plus.
-                <input type="checkbox" disabled checked={false} readOnly aria-describedby="plus-kinds-note" className="size-5" />
-              ) : (
-                <input type="checkbox" value={kind} defaultChecked={defaults.kinds.includes(kind)} {...register("kinds")} className="size-5 accent-groove-700" />
-              )}
+              <input type="checkbox" value={kind} defaultChecked={defaults.kinds.includes(kind)} {...register("kinds")} className="size-5 accent-groove-700" />
               <span className="flex-1 text-asphalt-900">{REMINDER_KIND_LABELS[kind]}</span>
               {PLUS_KINDS.has(kind) ? <span className="rounded-full bg-groove-50 px-2 py-0.5 text-xs font-semibold text-groove-800">Plus</span> : null}
             </label>
@@ -170,7 +177,10 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
         </>
       ) : (
         <p className="rounded border border-groove-200 bg-groove-50 p-3 text-sm text-groove-900">
-          Calendar alarms and e-mail reminders come with Plus. Your choices here keep working for the feed on Free.
+          Calendar alarms and e-mail reminders come with Plus. Your choices here keep working for the feed on Free.{" "}
+          <Link href="/account/billing" className="font-semibold">
+            Upgrade to Plus
+          </Link>
         </p>
       )}
       {result ? <Alert tone={result.tone}>{result.text}</Alert> : null}

@@ -4,6 +4,7 @@ import { db } from "@/db";
 import { driverProfile, member, organization, shopProfile, user } from "@/db/schema";
 import type { Session } from "@/lib/auth/session";
 import { requireAdmin } from "@/lib/auth/roles";
+import { plusSql } from "./billing";
 
 export async function listAccounts({ actor }: { actor: Session | null }) {
   requireAdmin(actor);
@@ -15,7 +16,7 @@ export async function listAccounts({ actor }: { actor: Session | null }) {
       role: user.role,
       banned: user.banned,
       createdAt: user.createdAt,
-      plan: driverProfile.plan,
+      plan: sql<"plus" | "free">`case when ${plusSql(user.id)} then 'plus' else 'free' end`,
       shops: sql<number>`(select count(*)::int from ${member} where ${member.userId} = ${user.id})`,
     })
     .from(user)

@@ -5,6 +5,7 @@ import "server-only";
 import { and, eq, inArray, isNull, lt, or, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { driverProfile, emailOptOut, reminderDelivery, reminderFeed, user } from "@/db/schema";
+import { planOf, plusSql } from "@/db/queries/billing";
 import { loadLogbookInput } from "@/db/queries/logbook-input";
 import { planAllowsKind, type Plan } from "@/lib/plan";
 import { hashFeedToken, newFeedToken } from "@/lib/reminders/token";
@@ -37,7 +38,8 @@ export async function reminderProfile({ userId }: { userId: string }): Promise<R
     userId,
     name: row.name,
     email: row.email,
-    plan: row.p.plan,
+    // From the stored subscription (status and period end), never a column set by hand.
+    plan: await planOf({ userId }),
     timezone: row.p.timezone,
     jurisdiction,
     emailReminders: row.p.emailReminders,
@@ -179,7 +181,7 @@ export async function driversForDelivery(): Promise<string[]> {
     .leftJoin(emailOptOut, and(eq(emailOptOut.userId, driverProfile.userId), eq(emailOptOut.kind, "reminder-digest")))
     .where(
       and(
-        eq(driverProfile.plan, "plus"),
+        plusSql(driverProfile.userId),
         eq(driverProfile.emailReminders, true),
         isNull(emailOptOut.userId),
         or(isNull(user.banned), eq(user.banned, false)),

@@ -1,4 +1,4 @@
-// Per-driver preferences, plan, reminder feed tokens, deliveries, and the
+// Per-driver preferences (the plan comes from the stored subscription, db/schema/billing.ts), reminder feed tokens, deliveries, and the
 // local e-mail fake's outbox.
 import { boolean, date, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { user } from "./auth";
@@ -7,7 +7,6 @@ const tz = (name: string) => timestamp(name, { withTimezone: true });
 
 export const unitSystem = pgEnum("unit_system", ["metric", "imperial"]);
 export const pressureUnit = pgEnum("pressure_unit", ["kpa", "psi", "bar"]);
-export const plan = pgEnum("plan", ["free", "plus"]);
 
 export const driverProfile = pgTable("driver_profile", {
   userId: text("user_id")
@@ -18,7 +17,6 @@ export const driverProfile = pgTable("driver_profile", {
   timezone: text("timezone").notNull().default("UTC"),
   // A `Jurisdiction` of lib/tires (e.g. "EU", "US", "FI"): picks the depth limit.
   jurisdiction: text("jurisdiction").notNull().default("EU"),
-  plan: plan("plan").notNull().default("free"),
   // Reminder settings, validated by lib/validation/reminders.ts.
   reminderSettings: jsonb("reminder_settings").notNull().default({}),
   emailReminders: boolean("email_reminders").notNull().default(false),

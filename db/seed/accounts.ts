@@ -24,7 +24,7 @@ export async function seedAccounts(): Promise<DemoIds> {
     ids[key] = await ensureUser(a.name, a.email);
   }
   await db.update(user).set({ role: "admin" }).where(eq(user.id, ids.ops));
-  await db.update(driverProfile).set({ plan: "plus", emailReminders: true }).where(eq(driverProfile.userId, ids.ada));
+  await db.update(driverProfile).set({ emailReminders: true }).where(eq(driverProfile.userId, ids.ada));
 
   await db
     .insert(organization)

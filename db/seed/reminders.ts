@@ -10,7 +10,6 @@ export async function seedReminders({ ids }: SeedContext) {
   await db
     .update(driverProfile)
     .set({
-      plan: "plus",
       emailReminders: true,
       timezone: "Europe/London",
       reminderSettings: {
@@ -23,6 +22,6 @@ export async function seedReminders({ ids }: SeedContext) {
       },
     })
     .where(eq(driverProfile.userId, ids.ada));
-  await db.update(driverProfile).set({ plan: "free", emailReminders: false, timezone: "Europe/London" }).where(eq(driverProfile.userId, ids.tomas));
+  await db.update(driverProfile).set({ emailReminders: false, timezone: "Europe/London" }).where(eq(driverProfile.userId, ids.tomas));
 
 }

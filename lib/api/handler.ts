@@ -91,7 +91,7 @@ function errorResponse(err: unknown): Response {
   const e = toAppError(err);
   const headers: Record<string, string> = { "cache-control": "no-store" };
   if (e instanceof RateLimitedError) headers["retry-after"] = String(e.retryAfterSeconds);
-  return NextResponse.json(errorBody(e), { status: e.status, headers });
+  return NextResponse.json(errorBody(e, appUrl()), { status: e.status, headers });
 }
 
 export function route<P extends Params = Params>(fn: (args: HandlerArgs<P>) => Promise<Response | unknown>, options: RouteOptions = {}) {

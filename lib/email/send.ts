@@ -32,7 +32,8 @@ export type EmailKind =
   | "pass-received"
   | "pass-ended"
   | "shop-entry"
-  | "plus-receipt";
+  | "plus-receipt"
+  | "plus-payment-failed";
 
 export type SendEmailInput = {
   to: string | string[];

@@ -3,7 +3,7 @@
 // All names are invented.
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
-import { driverProfile, tire, tireSet, treadCheck, treadReading, vehicle } from "@/db/schema";
+import { billingSubscription, driverProfile, tire, tireSet, treadCheck, treadReading, vehicle } from "@/db/schema";
 
 type Position = (typeof tire.$inferInsert)["position"];
 const FOUR: Position[] = ["front_left", "front_right", "rear_left", "rear_right"];
@@ -67,10 +67,27 @@ export async function addCheck({
 }
 
 export async function setPlan({ userId, plan, emailReminders, settings, timezone }: { userId: string; plan?: "free" | "plus"; emailReminders?: boolean; settings?: Record<string, unknown>; timezone?: string }) {
+  // The plan comes from the stored subscription: Plus is an active one running for 30 more days.
+  if (plan === "free") await db.delete(billingSubscription).where(eq(billingSubscription.userId, userId));
+  if (plan === "plus") {
+    const now = new Date();
+    await db
+      .insert(billingSubscription)
+      .values({
+        stripeSubscriptionId: `sub_fixture_${userId}`,
+        userId,
+        stripeCustomerId: `cus_fixture_${userId}`,
+        status: "active",
+        interval: "month",
+        currentPeriodEnd: new Date(now.getTime() + 30 * 86_400_000),
+        describedAt: now,
+      })
+      .onConflictDoUpdate({ target: billingSubscription.stripeSubscriptionId, set: { status: "active", currentPeriodEnd: new Date(now.getTime() + 30 * 86_400_000), describedAt: now } });
+  }
+  if (emailReminders === undefined && !settings && !timezone) return;
   await db
     .update(driverProfile)
     .set({
-      ...(plan ? { plan } : {}),
       ...(emailReminders !== undefined ? { emailReminders } : {}),
       ...(settings ? { reminderSettings: settings } : {}),
       ...(timezone ? { timezone } : {}),

@@ -81,7 +81,10 @@ export default async function RemindersPage() {
             </ul>
             {plus ? null : (
               <p className="mt-3 text-sm text-asphalt-600">
-                See <Link href="/pricing">pricing</Link> for what Plus costs.
+                <Link href="/account/billing" className="font-semibold">
+                  Upgrade to Plus
+                </Link>{" "}
+                · <Link href="/pricing">what it costs</Link>
               </p>
             )}
             {plus && digestOff ? (

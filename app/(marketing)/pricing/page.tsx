@@ -1,7 +1,9 @@
 import { Check } from "lucide-react";
 import type { Metadata } from "next";
 import Link from "next/link";
+import { BuyPlus } from "@/components/billing/buy-plus";
 import { buttonVariants } from "@/components/ui/button-variants";
+import { getSession } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Pricing" };
 
@@ -20,7 +22,11 @@ const plans = [
   },
 ];
 
-export default function PricingPage() {
+export const dynamic = "force-dynamic";
+
+export default async function PricingPage() {
+  // Signed in: Plus is bought right here. Signed out: an account first, then the billing page.
+  const signedIn = !!(await getSession());
   return (
     <section className="mx-auto max-w-4xl px-4 py-12">
       <h1 className="text-3xl font-extrabold tracking-tight">Plans</h1>
@@ -39,9 +45,24 @@ export default function PricingPage() {
                 </li>
               ))}
             </ul>
-            <Link href="/sign-up" className={buttonVariants({ className: "mt-6", variant: p.name === "Plus" ? "primary" : "secondary" })}>
-              {p.name === "Plus" ? "Start free, upgrade any time" : "Start free"}
-            </Link>
+            {p.name === "Plus" && signedIn ? (
+              <div className="mt-6">
+                <BuyPlus
+                  options={[
+                    { interval: "month", label: "Buy Plus monthly, €2.50" },
+                    { interval: "year", label: "Buy Plus yearly, €24.00" },
+                  ]}
+                />
+              </div>
+            ) : p.name === "Plus" ? (
+              <Link href="/sign-up?next=/account/billing" className={buttonVariants({ className: "mt-6", variant: "primary" })}>
+                Create an account, then buy Plus
+              </Link>
+            ) : (
+              <Link href={signedIn ? "/vehicles" : "/sign-up"} className={buttonVariants({ className: "mt-6", variant: "secondary" })}>
+                {signedIn ? "Go to your vehicles" : "Start free"}
+              </Link>
+            )}
           </div>
         ))}
       </div>

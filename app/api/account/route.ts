@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { deleteAccount } from "@/db/queries/account";
 import { parseJson, route } from "@/lib/api/handler";
 import { auth } from "@/lib/auth/server";
+import { endSubscriptionsOf } from "@/lib/billing/service";
 import { AppError } from "@/lib/errors";
 import { removeStoredFile } from "@/lib/uploads";
 import { deleteAccountSchema } from "@/lib/validation/account";
@@ -16,6 +17,8 @@ export const DELETE = route(async ({ req, session }) => {
   const hash = accounts.find((a) => a.providerId === "credential")?.password;
   const ok = hash ? await ctx.password.verify({ hash, password: input.password }) : false;
   if (!ok) throw new AppError("invalid", "That password is not right.", { password: ["That password is not right."] });
+  // A paying driver's subscription ends first; if Stripe cannot be reached, nothing is deleted.
+  await endSubscriptionsOf({ userId: session!.user.id });
   const { storedFiles } = await deleteAccount({ userId: session!.user.id });
   await Promise.all(storedFiles.map((name) => removeStoredFile(name)));
   const res = NextResponse.json({ ok: true, deleted: true });

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { driverProfile, fakeOutbox } from "@/db/schema";
 import { GET as start } from "@/app/start/route";
+import { planOf } from "@/db/queries/billing";
 import { homeFor, isAdmin, membershipsOf, requireAdmin, requireSession, requireShopMember } from "@/lib/auth/roles";
 import { sessionFromRequest } from "@/lib/auth/session";
 import { auth } from "@/lib/auth/server";
@@ -12,7 +13,8 @@ describe("sign-up side effects", () => {
   it("creates a driver profile and sends a welcome e-mail through the resend SDK into the fake outbox", async () => {
     const u = await signUp({ name: "Pip Ostrander" });
     const [profile] = await db.select().from(driverProfile).where(eq(driverProfile.userId, u.id));
-    expect(profile).toMatchObject({ units: "metric", plan: "free" });
+    expect(profile).toMatchObject({ units: "metric" });
+    expect(await planOf({ userId: u.id })).toBe("free");
     const mails = await db.select().from(fakeOutbox);
     const welcome = mails.find((m) => m.toAddresses.includes(u.email));
     expect(welcome?.subject).toBe("Your Fourpatch logbook is ready");

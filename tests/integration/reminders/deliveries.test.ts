@@ -5,7 +5,7 @@
 import { and, eq, sql } from "drizzle-orm";
 import { afterEach, describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { driverProfile, emailOptOut, fakeOutbox, reminderDelivery } from "@/db/schema";
+import { billingSubscription, driverProfile, emailOptOut, fakeOutbox, reminderDelivery } from "@/db/schema";
 import { POST as cronPOST } from "@/app/api/cron/reminders/route";
 import { POST as oneClickPOST } from "@/app/unsubscribe/[token]/one-click/route";
 import { changeSubscription } from "@/app/unsubscribe/[token]/actions";
@@ -42,7 +42,7 @@ async function deliveriesOf(userId: string) {
 
 // Each test's driver leaves Plus afterwards, so later runs only see the next test's driver.
 afterEach(async () => {
-  await db.update(driverProfile).set({ plan: "free" }).where(eq(driverProfile.plan, "plus"));
+  await db.delete(billingSubscription).where(sql`true`);
 });
 
 describe("reminder e-mail run", () => {
