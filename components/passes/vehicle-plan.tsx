@@ -3,6 +3,7 @@
 // week and age. Each glyph draws the inner groove toward the car's centreline,
 // as the technician sees the tire from the driver's seat looking down. A tap
 // on "Measure" jumps to that tire's boxes in the record-work form.
+import { ChevronUp } from "lucide-react";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { TireTreadProfile } from "@/components/visual/tread-profile";
 import type { TireView } from "@/db/queries/logbook-view";
@@ -35,8 +36,8 @@ function WheelStation({ tire, side, limitMm, depthUnit, measurable }: { tire: Ti
       <p className="text-base font-bold leading-tight sm:text-lg">{POSITION_LABELS[tire.position]}</p>
       {tire.condition ? <ConditionBadge condition={tire.condition} className="text-xs sm:text-sm" /> : <span className="text-sm text-asphalt-600">No reading</span>}
       <figure className={cn("flex flex-col", side === "left" ? "items-end" : "items-start")}>
-        <TireTreadProfile tire={tire} limitMm={limitMm} depthUnit={depthUnit} innerSide={innerSide} className="h-16 w-24 sm:h-20 sm:w-28" />
-        <figcaption className="flex w-24 justify-between text-[0.6875rem] uppercase tracking-wide text-asphalt-500 sm:w-28" aria-hidden>
+        <TireTreadProfile tire={tire} limitMm={limitMm} depthUnit={depthUnit} innerSide={innerSide} className="h-20 w-28 sm:h-24 sm:w-36" />
+        <figcaption className="flex w-28 justify-between px-1 text-[0.6875rem] uppercase tracking-wide text-asphalt-500 sm:w-36" aria-hidden>
           <span>{innerSide === "left" ? "in" : "out"}</span>
           <span>{innerSide === "left" ? "out" : "in"}</span>
         </figcaption>
@@ -45,7 +46,7 @@ function WheelStation({ tire, side, limitMm, depthUnit, measurable }: { tire: Ti
         <span className="tabular-nums font-semibold">{tire.depthMm != null ? formatDepth(tire.depthMm, depthUnit) : "—"}</span>{" "}
         <span className="text-asphalt-600">{tire.latest ? `checked ${tire.latest.checkedOn}` : "no check yet"}</span>
       </p>
-      <p className="break-all font-mono text-xs sm:text-sm">{tire.dotCode ?? "No DOT code logged"}</p>
+      <p className="break-words font-mono text-xs tracking-tight sm:text-sm sm:tracking-normal">{tire.dotCode ?? "No DOT code logged"}</p>
       <p className="text-xs text-asphalt-700 sm:text-sm">
         {dotWeek(tire)}
         {tire.age ? ` · ${tire.age.years} y ${tire.age.months} m old` : ""}
@@ -68,7 +69,7 @@ export function VehiclePlan({ tires, limitMm, depthUnit, measurable }: { tires: 
       <div className="grid grid-cols-[minmax(0,1fr)_2.25rem_minmax(0,1fr)] gap-x-2 gap-y-4 sm:grid-cols-[minmax(0,1fr)_4rem_minmax(0,1fr)] sm:gap-x-3" aria-label="The tires at their wheels, front at the top" role="group">
         {/* The car's outline seen from above, front at the top, with its two axles. */}
         <div aria-hidden className="relative col-start-2 row-span-2 row-start-1 rounded-[1.25rem] border-2 border-asphalt-300 bg-asphalt-100">
-          <span className="absolute inset-x-2 top-1 text-center text-[0.625rem] font-bold uppercase tracking-widest text-asphalt-500">front</span>
+          <ChevronUp className="absolute left-1/2 top-1 size-5 -translate-x-1/2 text-asphalt-500" />
           <span className="absolute -inset-x-4 top-1/4 h-1 -translate-y-1/2 rounded bg-asphalt-400 sm:-inset-x-5" />
           <span className="absolute -inset-x-4 top-3/4 h-1 -translate-y-1/2 rounded bg-asphalt-400 sm:-inset-x-5" />
           <span className="absolute inset-y-[25%] left-1/2 w-0.5 -translate-x-1/2 bg-asphalt-300" />

@@ -52,7 +52,7 @@ export function ConditionBadge({ condition, className, detail }: { condition: Co
       data-condition={condition}
       title={code.meaning}
     >
-      <ConditionPatch condition={condition} ink={code.colours.ink} />
+      <ConditionPatch condition={condition} ink={code.colours.ink} className="h-[1.125rem] w-[0.85rem]" />
       <span>{code.word}</span>
       {detail ? <span className="font-normal">· {detail}</span> : null}
     </span>

@@ -174,11 +174,11 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
       ) : null}
 
       {/* The pass strip: time left always in view, and the record-work form one tap away. */}
-      <div className="fixed inset-x-0 bottom-0 z-40 border-t-4 border-groove-500 bg-asphalt-900 text-white" role="region" aria-label="Pass">
-        <div className="mx-auto flex max-w-6xl items-center justify-between gap-3 px-4 py-2.5">
+      <div className="fixed inset-x-0 bottom-0 z-40 border-t-4 border-groove-500 bg-asphalt-900 text-white print:hidden" role="region" aria-label="Pass">
+        <div className="mx-auto flex max-w-6xl items-center justify-between gap-3 px-4 py-2">
           <div className="min-w-0">
-            <TimeLeft endsAt={access.endsAt.toISOString()} serverNow={now.toISOString()} refreshOnEnd={false} onDark className="text-lg" />
-            <p className="truncate text-sm text-asphalt-300">
+            <TimeLeft endsAt={access.endsAt.toISOString()} serverNow={now.toISOString()} refreshOnEnd={false} onDark className="text-base sm:text-lg" />
+            <p className="truncate text-xs text-asphalt-300 sm:text-sm">
               <span className="hidden sm:inline">{v.nickname} · </span>
               {SCOPE_LABEL[access.scope]}
               <span className="hidden md:inline"> · {access.shopName}</span>
