@@ -28,29 +28,34 @@ function dotWeek(t: TireView) {
 function WheelStation({ tire, side, limitMm, depthUnit, measurable }: { tire: TireView; side: Side; limitMm: number; depthUnit: DepthUnit; measurable: boolean }) {
   // Inner toward the centreline: on the left wheels that is the glyph's right side.
   const innerSide: Side = side === "left" ? "right" : "left";
+  const near = side === "left" ? "items-end text-right" : "items-start text-left";
   return (
-    <div
-      className={cn("relative flex min-w-0 flex-col gap-1.5 rounded-lg border border-asphalt-200 bg-white p-2.5 shadow-card sm:p-3", side === "left" ? "items-end text-right" : "items-start text-left")}
-      data-testid={`tire-${tire.position}`}
-    >
-      <p className="text-base font-bold leading-tight sm:text-lg">{POSITION_LABELS[tire.position]}</p>
-      {tire.condition ? <ConditionBadge condition={tire.condition} className="text-xs sm:text-sm" /> : <span className="text-sm text-asphalt-600">No reading</span>}
-      <figure className={cn("flex flex-col", side === "left" ? "items-end" : "items-start")}>
-        <TireTreadProfile tire={tire} limitMm={limitMm} depthUnit={depthUnit} innerSide={innerSide} className="h-20 w-28 sm:h-24 sm:w-36" />
-        <figcaption className="flex w-28 justify-between px-1 text-[0.6875rem] uppercase tracking-wide text-asphalt-500 sm:w-36" aria-hidden>
-          <span>{innerSide === "left" ? "in" : "out"}</span>
-          <span>{innerSide === "left" ? "out" : "in"}</span>
-        </figcaption>
-      </figure>
-      <p className="text-sm text-asphalt-800">
-        <span className="tabular-nums font-semibold">{tire.depthMm != null ? formatDepth(tire.depthMm, depthUnit) : "—"}</span>{" "}
-        <span className="text-asphalt-600">{tire.latest ? `checked ${tire.latest.checkedOn}` : "no check yet"}</span>
-      </p>
-      <p className="break-words font-mono text-xs tracking-tight sm:text-sm sm:tracking-normal">{tire.dotCode ?? "No DOT code logged"}</p>
-      <p className="text-xs text-asphalt-700 sm:text-sm">
-        {dotWeek(tire)}
-        {tire.age ? ` · ${tire.age.years} y ${tire.age.months} m old` : ""}
-      </p>
+    <div className={cn("relative flex min-w-0 flex-col gap-1.5 rounded-lg border border-asphalt-200 bg-white p-2.5 shadow-card sm:p-3", near)} data-testid={`tire-${tire.position}`}>
+      <div className={cn("flex flex-col gap-1.5 sm:w-full sm:flex-row sm:items-center sm:justify-between", side === "left" ? "items-end sm:flex-row-reverse" : "items-start")}>
+        <p className="text-base font-bold leading-tight sm:text-lg">{POSITION_LABELS[tire.position]}</p>
+        {tire.condition ? <ConditionBadge condition={tire.condition} className="text-xs sm:text-sm" /> : <span className="text-sm text-asphalt-600">No reading</span>}
+      </div>
+      {/* The glyph sits on the axle's side of the station; the details on the outside. */}
+      <div className={cn("flex flex-col gap-1.5 sm:w-full sm:gap-3", side === "left" ? "items-end sm:flex-row-reverse" : "items-start sm:flex-row")}>
+        <figure className={cn("flex shrink-0 flex-col", side === "left" ? "items-end" : "items-start")}>
+          <TireTreadProfile tire={tire} limitMm={limitMm} depthUnit={depthUnit} innerSide={innerSide} className="h-20 w-28 sm:h-24 sm:w-36" />
+          <figcaption className="flex w-28 justify-between px-1 text-[0.6875rem] uppercase tracking-wide text-asphalt-500 sm:w-36" aria-hidden>
+            <span>{innerSide === "left" ? "in" : "out"}</span>
+            <span>{innerSide === "left" ? "out" : "in"}</span>
+          </figcaption>
+        </figure>
+        <div className={cn("flex min-w-0 flex-col gap-1", near)}>
+          <p className="text-sm text-asphalt-800">
+            <span className="tabular-nums font-semibold">{tire.depthMm != null ? formatDepth(tire.depthMm, depthUnit) : "—"}</span>{" "}
+            <span className="text-asphalt-600">{tire.latest ? `checked ${tire.latest.checkedOn}` : "no check yet"}</span>
+          </p>
+          <p className="break-words font-mono text-xs tracking-tight sm:text-sm sm:tracking-normal">{tire.dotCode ?? "No DOT code logged"}</p>
+          <p className="text-xs text-asphalt-700 sm:text-sm">
+            {dotWeek(tire)}
+            {tire.age ? ` · ${tire.age.years} y ${tire.age.months} m old` : ""}
+          </p>
+        </div>
+      </div>
       {tire.pattern && tire.pattern.kind !== "even" ? <p className="text-xs text-asphalt-700 sm:text-sm">{tire.pattern.likelyCause}</p> : null}
       {measurable ? (
         <a href={`#check-${tire.position}`} className="inline-flex min-h-11 items-center rounded border border-groove-600 px-3 text-sm font-semibold text-groove-800 no-underline hover:bg-groove-50">

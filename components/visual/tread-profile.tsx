@@ -27,14 +27,27 @@ export function TreadProfile({ depthUnit, className, "data-testid": testId, ...i
     >
       <title>{label}</title>
       {/* The zone below the limit, across the whole tread. */}
-      <rect x={left} y={g.limitY} width={right - left} height={baseY - g.limitY} fill={limitZone.fill} fillOpacity={limitZone.fillOpacity} data-part="limit-zone" />
-      <line x1={left} x2={right} y1={g.limitY} y2={g.limitY} stroke={limitZone.line} strokeWidth={1} strokeDasharray="3 2" data-part="limit-line" />
+      <rect x={left} y={g.limitY} width={right - left} height={baseY - g.limitY} fill={limitZone.fill} fillOpacity={limitZone.fillOpacity * 1.8} data-part="limit-zone" />
+      <line x1={left} x2={right} y1={g.limitY} y2={g.limitY} stroke={limitZone.line} strokeWidth={1.25} data-part="limit-line" />
       {g.bars.map((b) => (
         <g key={b.groove} data-groove={b.groove}>
           {/* What the rib stood at when new: the rubber already worn away. */}
           <rect x={b.x + 0.5} y={g.newY} width={b.width - 1} height={baseY - g.newY} rx={1.5} fill="none" stroke={asphalt[400]} strokeWidth={1} strokeDasharray={g.newKnown ? "2 1.5" : "1 2"} data-part="new" />
           {b.y !== null ? (
-            <rect x={b.x} y={b.y} width={b.width} height={b.height} rx={1.5} fill={b.atLimit ? limitZone.line : asphalt[800]} data-part="bar" data-depth={b.depthMm ?? undefined} />
+            // A rib at or below the limit is drawn hollow, so it stands out without colour too.
+            <rect
+              x={b.atLimit ? b.x + 0.75 : b.x}
+              y={b.atLimit ? Math.min(b.y, baseY - 1.5) : b.y}
+              width={b.atLimit ? b.width - 1.5 : b.width}
+              height={b.atLimit ? Math.max(b.height, 1.5) : b.height}
+              rx={1.5}
+              fill={b.atLimit ? "#ffffff" : asphalt[800]}
+              stroke={b.atLimit ? limitZone.line : "none"}
+              strokeWidth={1.5}
+              data-part="bar"
+              data-at-limit={b.atLimit || undefined}
+              data-depth={b.depthMm ?? undefined}
+            />
           ) : (
             <path d={`M${b.x + 3},${baseY - 3}l${b.width - 6},-4`} stroke={asphalt[500]} strokeWidth={1.5} data-part="no-reading" />
           )}
