@@ -9,7 +9,8 @@ import { CartesianGrid, Legend, Line, LineChart, ReferenceArea, ResponsiveContai
 import type { TireView } from "@/db/queries/logbook-view";
 import { kmToDistance, mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/logbook";
-import { asphalt, limitZone } from "@/lib/visual/tokens";
+import { DEPTH_PLAN_MARGIN_MM, DEPTH_WATCH_MARGIN_MM } from "@/lib/tires";
+import { asphalt, condition, limitZone } from "@/lib/visual/tokens";
 import { formatDate } from "./format";
 
 // Each tire's own colour and marker: identities, not conditions, so none of them is a condition colour.
@@ -93,7 +94,7 @@ export function WearChart({ tires, limitMm, limitSource, depthUnit, distanceUnit
     <figure className="space-y-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <figcaption className="text-sm text-asphalt-700">
-          Tread depth ({unitLabel}) of each tire against {axis === "date" ? "the date" : "the odometer"}; dashed lines are projections to the hatched zone below the limit.
+          Tread depth ({unitLabel}) of each tire against {axis === "date" ? "the date" : "the odometer"}; dashed lines are projections to the hatched zone below the limit; the bands above it are where a tire turns “Plan to replace” and “Watch”.
         </figcaption>
         <div role="group" aria-label="Chart axis" className="inline-flex rounded border border-asphalt-300">
           {(["date", "odometer"] as const).map((a) => (
@@ -118,6 +119,23 @@ export function WearChart({ tires, limitMm, limitSource, depthUnit, distanceUnit
             <YAxis dataKey="y" type="number" domain={[0, "auto"]} tick={{ fontSize: 12 }} width={40} unit={depthUnit === "mm" ? "" : ""} />
             <Tooltip labelFormatter={(v) => xFormat(Number(v))} formatter={(v, n) => [`${v} ${unitLabel}`, n]} />
             <Legend />
+            {/* The depth conditions above the limit, as faint bands in the condition palette. */}
+            <ReferenceArea
+              y1={y(limitMm + DEPTH_PLAN_MARGIN_MM)}
+              y2={y(limitMm + DEPTH_WATCH_MARGIN_MM)}
+              fill={condition.watch.wash}
+              fillOpacity={0.7}
+              ifOverflow="hidden"
+              label={{ value: "Watch", position: "insideRight", fill: condition.watch.ink, fontSize: 11 }}
+            />
+            <ReferenceArea
+              y1={y(limitMm)}
+              y2={y(limitMm + DEPTH_PLAN_MARGIN_MM)}
+              fill={condition.plan.wash}
+              fillOpacity={0.8}
+              ifOverflow="hidden"
+              label={{ value: "Plan", position: "insideRight", fill: condition.plan.ink, fontSize: 11 }}
+            />
             <ReferenceArea
               y1={0}
               y2={y(limitMm)}
