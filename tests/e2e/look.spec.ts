@@ -168,3 +168,25 @@ test("the condition code and the glyph read in greyscale and under simulated pro
   }
   await techCtx.close();
 });
+
+test("the mark is in the header, and the favicon, app icons and manifest are served", async ({ page, request }) => {
+  await page.goto("/sign-in");
+  await expect(page.getByTestId("brand-mark").first()).toBeVisible();
+  await expect(page.locator('link[rel="manifest"]')).toHaveAttribute("href", /manifest\.webmanifest/);
+  await expect(page.locator('link[rel="icon"][type="image/svg+xml"]')).toHaveCount(1);
+  await expect(page.locator('link[rel="apple-touch-icon"]')).toHaveCount(1);
+  const manifest = await request.get("/manifest.webmanifest");
+  expect(manifest.status()).toBe(200);
+  const body = (await manifest.json()) as { icons: { src: string; type: string }[]; start_url: string };
+  expect(body.start_url).toBe("/vehicles");
+  for (const icon of body.icons) {
+    const res = await request.get(icon.src);
+    expect(res.status(), icon.src).toBe(200);
+    expect(res.headers()["content-type"]).toBe("image/png");
+  }
+  for (const [path, type] of [["/favicon.ico", "image/x-icon"], ["/icon.svg", "image/svg+xml"]]) {
+    const res = await request.get(path);
+    expect(res.status(), path).toBe(200);
+    expect(res.headers()["content-type"]).toContain(type);
+  }
+});
