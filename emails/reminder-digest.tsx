@@ -1,4 +1,6 @@
 import { Button, Link, Section, Text } from "@react-email/components";
+import type { ConditionLevel } from "@/lib/visual/condition-code";
+import { ConditionChip } from "./components/condition-chip";
 import { EmailLayout, button, paragraph } from "./components/layout";
 
 export type DigestItem = {
@@ -7,6 +9,8 @@ export type DigestItem = {
   dateLabel: string;
   /** A word, never a colour alone: "Replace now", "Plan to replace", "Watch", "Coming up". */
   severityLabel: string;
+  /** The condition code's level, drawn as its chip; null for an item that judges no tire. */
+  condition?: ConditionLevel | null;
   overdue: boolean;
   reason: string;
   whatToDo: string;
@@ -34,7 +38,8 @@ export default function ReminderDigestEmail({ name, items, remindersUrl, unsubsc
         <Section key={item.url + item.subject} style={card}>
           <Text style={{ ...small, fontWeight: 700, fontSize: 16, color: "#1b1f24" }}>{item.subject}</Text>
           <Text style={small}>
-            {item.overdue ? "Was due" : "Due"} {item.dateLabel} · {item.severityLabel}
+            {item.condition ? <ConditionChip level={item.condition} /> : null} {item.overdue ? "Was due" : "Due"} {item.dateLabel}
+            {item.condition ? "" : ` · ${item.severityLabel}`}
           </Text>
           <Text style={small}>{item.reason}</Text>
           <Text style={small}>What to do: {item.whatToDo}</Text>
@@ -61,6 +66,7 @@ ReminderDigestEmail.PreviewProps = {
       subject: "Meadowline summer on Blue estate: tread reaches 1.6 mm",
       dateLabel: "Sun 15 Nov 2026",
       severityLabel: "Plan to replace",
+      condition: "plan",
       overdue: false,
       reason: "The first tire of this set should reach the 1.6 mm limit around 61,000 km.",
       whatToDo: "Measure the tread again and plan new tires if the reading confirms it.",

@@ -57,7 +57,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
       <div className="mb-6 grid gap-4 lg:grid-cols-[2fr_1fr]">
         <Card className="space-y-3">
           <CardTitle>Wear chart</CardTitle>
-          <WearChart tires={s.tires} limitMm={s.limit.minMm} depthUnit={depthUnit} distanceUnit={distanceUnit} />
+          <WearChart tires={s.tires} limitMm={s.limit.minMm} limitSource={s.limit.source} depthUnit={depthUnit} distanceUnit={distanceUnit} />
         </Card>
         <Card className="space-y-3">
           <CardTitle>The set</CardTitle>
@@ -93,7 +93,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         <h2 id="tires-h" className="text-xl font-bold">
           Each tire
         </h2>
-        <TireList tires={s.tires} depthUnit={depthUnit} showPattern />
+        <TireList tires={s.tires} depthUnit={depthUnit} showPattern limitMm={s.limit.minMm} />
         {s.tires.some((t) => t.ageReason || t.depthReason) ? (
           <details className="rounded border border-asphalt-200 bg-white p-3 text-sm">
             <summary className="cursor-pointer font-semibold">Why each condition</summary>

@@ -1,19 +1,24 @@
 // A set's tires: position, DOT week, age, depth and condition, as a list
 // that reads on a phone and as a grid on a desktop.
 import { ConditionBadge } from "@/components/ui/condition-badge";
+import { TireTreadProfile } from "@/components/visual/tread-profile";
 import type { TireView } from "@/db/queries/logbook-view";
 import { formatDepth, type DepthUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/logbook";
 import { formatAge, formatDate } from "./format";
 
-export function TireList({ tires, depthUnit, showPattern = false }: { tires: TireView[]; depthUnit: DepthUnit; showPattern?: boolean }) {
+/** With `limitMm`, each tire shows its tread-profile glyph against that limit. */
+export function TireList({ tires, depthUnit, showPattern = false, limitMm }: { tires: TireView[]; depthUnit: DepthUnit; showPattern?: boolean; limitMm?: number }) {
   if (tires.length === 0) return <p className="text-sm text-asphalt-600">No tires recorded for this set.</p>;
   return (
     <ul className="grid gap-2 sm:grid-cols-2" aria-label="Tires">
       {tires.map((t) => (
         <li key={t.id} className="rounded border border-asphalt-200 p-3 text-sm" data-testid="tire">
           <div className="flex flex-wrap items-center justify-between gap-2">
-            <span className="font-semibold">{POSITION_LABELS[t.position]}</span>
+            <div className="flex items-center gap-3">
+              {limitMm != null ? <TireTreadProfile tire={t} limitMm={limitMm} depthUnit={depthUnit} className="h-12 w-[4.4rem]" /> : null}
+              <span className="font-semibold">{POSITION_LABELS[t.position]}</span>
+            </div>
             {t.condition ? <ConditionBadge condition={t.condition} /> : <span className="text-asphalt-600">No condition yet</span>}
           </div>
           <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">

@@ -171,7 +171,7 @@ function SetCard({
         </div>
         {set.condition ? <ConditionBadge condition={set.condition} detail="set" /> : null}
       </div>
-      <TireList tires={set.tires} depthUnit={depthUnit} />
+      <TireList tires={set.tires} depthUnit={depthUnit} limitMm={set.limit.minMm} />
       {set.axleAdvice.length ? (
         <ul className="list-disc pl-5 text-sm text-asphalt-700">
           {set.axleAdvice.map((a) => (

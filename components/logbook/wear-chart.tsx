@@ -1,22 +1,42 @@
 "use client";
-// Depth against date or odometer for each tire of a set, with the set's
-// limit as a line and each tire's projection to the limit dashed. Each tire
+// Depth against date or odometer for each tire of a set, with the zone below
+// the set's limit shaded and hatched in the condition palette (labelled with
+// the limit and its source), and each tire's projection to the limit dashed. Each tire
 // has its own colour *and* marker shape, and the same facts are in the
 // table under the chart.
 import { useState } from "react";
-import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { CartesianGrid, Legend, Line, LineChart, ReferenceArea, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { TireView } from "@/db/queries/logbook-view";
 import { kmToDistance, mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/logbook";
+import { DEPTH_PLAN_MARGIN_MM, DEPTH_WATCH_MARGIN_MM } from "@/lib/tires";
+import { asphalt, condition, limitZone } from "@/lib/visual/tokens";
 import { formatDate } from "./format";
 
+// Each tire's own colour and marker: identities, not conditions, so none of them is a condition colour.
 const LOOK = [
-  { stroke: "#1e625c", shape: "circle" },
-  { stroke: "#a04a00", shape: "square" },
-  { stroke: "#5b3fa0", shape: "triangle" },
-  { stroke: "#434a56", shape: "diamond" },
-  { stroke: "#1f7a3d", shape: "cross" },
+  { stroke: "#217a71", shape: "circle" },
+  { stroke: "#8a5a12", shape: "square" },
+  { stroke: "#2a74a8", shape: "triangle" },
+  { stroke: asphalt[700], shape: "diamond" },
+  { stroke: "#6b6b1f", shape: "cross" },
 ] as const;
+
+const HATCH_ID = "fourpatch-limit-hatch";
+
+/** The hatch of the limit zone, so the zone reads in greyscale and in print as well as in colour. */
+function LimitHatch() {
+  return (
+    <svg width="0" height="0" aria-hidden className="absolute">
+      <defs>
+        <pattern id={HATCH_ID} width="7" height="7" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+          <rect width="7" height="7" fill={limitZone.fill} fillOpacity={limitZone.fillOpacity} />
+          <line x1="0" y1="0" x2="0" y2="7" stroke={limitZone.line} strokeOpacity={0.35} strokeWidth={2} />
+        </pattern>
+      </defs>
+    </svg>
+  );
+}
 
 const day = (iso: string) => Date.UTC(Number(iso.slice(0, 4)), Number(iso.slice(5, 7)) - 1, Number(iso.slice(8, 10)));
 const isoOf = (ms: number) => new Date(ms).toISOString().slice(0, 10);
@@ -32,7 +52,7 @@ function Marker({ cx, cy, stroke, shape }: { cx?: number; cy?: number; stroke: s
   return <circle cx={cx} cy={cy} r={s} fill={stroke} />;
 }
 
-export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: TireView[]; limitMm: number; depthUnit: DepthUnit; distanceUnit: DistanceUnit }) {
+export function WearChart({ tires, limitMm, limitSource, depthUnit, distanceUnit }: { tires: TireView[]; limitMm: number; limitSource?: string; depthUnit: DepthUnit; distanceUnit: DistanceUnit }) {
   const [axis, setAxis] = useState<"date" | "odometer">("date");
   const withData = tires.filter((t) => t.series.length > 0);
   if (withData.length === 0) {
@@ -74,7 +94,7 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
     <figure className="space-y-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <figcaption className="text-sm text-asphalt-700">
-          Tread depth ({unitLabel}) of each tire against {axis === "date" ? "the date" : "the odometer"}; the red line is the limit, dashed lines are projections.
+          Tread depth ({unitLabel}) of each tire against {axis === "date" ? "the date" : "the odometer"}; dashed lines are projections to the hatched zone below the limit; the bands above it are where a tire turns “Plan to replace” and “Watch”.
         </figcaption>
         <div role="group" aria-label="Chart axis" className="inline-flex rounded border border-asphalt-300">
           {(["date", "odometer"] as const).map((a) => (
@@ -90,6 +110,7 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
           ))}
         </div>
       </div>
+      <LimitHatch />
       <div className="h-72 w-full sm:h-96" data-testid="wear-chart">
         <ResponsiveContainer width="100%" height="100%">
           <LineChart margin={{ top: 10, right: 36, bottom: 8, left: 0 }}>
@@ -98,7 +119,33 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
             <YAxis dataKey="y" type="number" domain={[0, "auto"]} tick={{ fontSize: 12 }} width={40} unit={depthUnit === "mm" ? "" : ""} />
             <Tooltip labelFormatter={(v) => xFormat(Number(v))} formatter={(v, n) => [`${v} ${unitLabel}`, n]} />
             <Legend />
-            <ReferenceLine y={y(limitMm)} stroke="#b3141b" strokeWidth={2} label={{ value: `Limit ${y(limitMm)} ${unitLabel}`, position: "insideBottomLeft", fill: "#b3141b", fontSize: 12 }} />
+            {/* The depth conditions above the limit, as faint bands in the condition palette. */}
+            <ReferenceArea
+              y1={y(limitMm + DEPTH_PLAN_MARGIN_MM)}
+              y2={y(limitMm + DEPTH_WATCH_MARGIN_MM)}
+              fill={condition.watch.wash}
+              fillOpacity={0.7}
+              ifOverflow="hidden"
+              label={{ value: "Watch", position: "insideRight", fill: condition.watch.ink, fontSize: 11 }}
+            />
+            <ReferenceArea
+              y1={y(limitMm)}
+              y2={y(limitMm + DEPTH_PLAN_MARGIN_MM)}
+              fill={condition.plan.wash}
+              fillOpacity={0.8}
+              ifOverflow="hidden"
+              label={{ value: "Plan", position: "insideRight", fill: condition.plan.ink, fontSize: 11 }}
+            />
+            <ReferenceArea
+              y1={0}
+              y2={y(limitMm)}
+              fill={`url(#${HATCH_ID})`}
+              stroke={limitZone.line}
+              strokeOpacity={0.5}
+              strokeDasharray="4 3"
+              ifOverflow="extendDomain"
+              label={{ value: `Below the ${y(limitMm)} ${unitLabel} limit`, position: "insideBottomRight", fill: limitZone.line, fontSize: 12, fontWeight: 700 }}
+            />
             {lines.map((l) => (
               <Line
                 key={l.tire.id}
@@ -130,6 +177,15 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
           </LineChart>
         </ResponsiveContainer>
       </div>
+      <p className="flex items-start gap-2 text-sm text-asphalt-700" data-testid="limit-key">
+        <svg viewBox="0 0 20 14" className="mt-0.5 h-3.5 w-5 shrink-0" aria-hidden>
+          <rect width="20" height="14" fill={`url(#${HATCH_ID})`} stroke={limitZone.line} strokeOpacity={0.5} strokeDasharray="3 2" />
+        </svg>
+        <span>
+          Below the limit: {y(limitMm)} {unitLabel}
+          {limitSource ? ` — ${limitSource}` : ""}. Local law sets the legal minimum.
+        </span>
+      </p>
     </figure>
   );
 }

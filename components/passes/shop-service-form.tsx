@@ -141,7 +141,7 @@ export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnde
           {withCheck ? (
             <div className="grid gap-3 md:grid-cols-2">
               {ctx.set.tires.map((t, i) => (
-                <fieldset key={t.id} className="rounded-lg border border-asphalt-200 bg-asphalt-50 p-3" data-testid={`check-${t.position}`}>
+                <fieldset key={t.id} id={`check-${t.position}`} className="scroll-mt-28 rounded-lg border border-asphalt-200 bg-asphalt-50 p-3" data-testid={`check-${t.position}`}>
                   <legend className="px-1 text-base font-bold">{POSITION_LABELS[t.position]}</legend>
                   <div className="grid grid-cols-4 items-end gap-2">
                     {(["inner", "centre", "outer"] as const).map((g) => (

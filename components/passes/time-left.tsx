@@ -8,7 +8,7 @@ import { useEffect, useRef, useState } from "react";
 import { cn } from "@/lib/cn";
 import { formatTimeLeft } from "@/lib/validation/passes";
 
-export function TimeLeft({ endsAt, serverNow, className, refreshOnEnd = true }: { endsAt: string; serverNow: string; className?: string; refreshOnEnd?: boolean }) {
+export function TimeLeft({ endsAt, serverNow, className, refreshOnEnd = true, onDark = false }: { endsAt: string; serverNow: string; className?: string; refreshOnEnd?: boolean; onDark?: boolean }) {
   const router = useRouter();
   const offset = useRef<number | null>(null);
   const [left, setLeft] = useState(() => new Date(endsAt).getTime() - new Date(serverNow).getTime());
@@ -25,7 +25,7 @@ export function TimeLeft({ endsAt, serverNow, className, refreshOnEnd = true }: 
   }, [ended, refreshOnEnd, router]);
   const soon = !ended && left < 60 * 60 * 1000;
   return (
-    <span className={cn("inline-flex items-center gap-1.5 font-semibold", soon && "text-condition-plan", ended && "text-condition-replace", className)} data-testid="time-left">
+    <span className={cn("inline-flex items-center gap-1.5 font-semibold", onDark && "text-white", soon && (onDark ? "text-condition-plan-bg" : "text-condition-plan"), ended && (onDark ? "text-condition-replace-bg" : "text-condition-replace"), className)} data-testid="time-left">
       <Clock aria-hidden className="size-4 shrink-0" />
       {ended ? "Pass ended" : `${formatTimeLeft(left)} left`}
     </span>

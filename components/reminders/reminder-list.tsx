@@ -9,7 +9,7 @@ import { CAUTION, type ReminderItem } from "@/lib/tires";
 function SeverityBadge({ item }: { item: ReminderItem }) {
   if (item.severity === "info") {
     return (
-      <span className="inline-flex items-center gap-1.5 rounded-full border border-asphalt-300 bg-asphalt-50 px-2.5 py-0.5 text-sm font-semibold text-asphalt-700" data-condition="info">
+      <span className="inline-flex items-center gap-1.5 rounded border border-asphalt-300 bg-asphalt-50 px-2.5 py-0.5 text-sm font-semibold text-asphalt-700" data-condition="info">
         <CalendarDays aria-hidden className="size-4" />
         Coming up
       </span>

@@ -9,7 +9,7 @@ export const buttonVariants = cva(
         primary: "bg-groove-700 text-white hover:bg-groove-800",
         secondary: "border border-asphalt-300 bg-white text-asphalt-900 hover:bg-asphalt-100",
         ghost: "text-groove-800 hover:bg-groove-50",
-        danger: "bg-condition-replace text-white hover:bg-red-800",
+        danger: "bg-condition-replace text-white hover:bg-condition-replace/85",
       },
       size: { md: "", sm: "min-h-9 px-3 py-1 text-sm", lg: "min-h-12 px-6 text-lg" },
     },

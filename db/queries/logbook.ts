@@ -410,7 +410,16 @@ export type VehicleSummary = {
   model: string;
   year: number | null;
   odometerUnit: "km" | "mi";
-  mountedSet: { id: string; label: string | null; kind: SetView["kind"]; size: string; condition: Condition | null } | null;
+  mountedSet: {
+    id: string;
+    label: string | null;
+    kind: SetView["kind"];
+    size: string;
+    condition: Condition | null;
+    /** What the overview's tread-profile glyphs need, one per tire. */
+    limitMm: number;
+    tires: Pick<TireView, "id" | "position" | "newDepthMm" | "latest" | "condition">[];
+  } | null;
   storedSets: { id: string; label: string | null; kind: SetView["kind"]; storageLocation: string | null; condition: Condition | null }[];
   nextReminder: Pick<ReminderItem, "date" | "subject" | "severity" | "overdue" | "kind"> | null;
   lastCheck: { date: string; odometerKm: number | null } | null;
@@ -442,13 +451,19 @@ export async function listVehicleSummaries({ userId, today }: { userId: string; 
     else readingsByTire.set(r.tireId, [r]);
   }
 
-  const condOf = (s: typeof tireSet.$inferSelect) => {
+  const viewsOf = (s: typeof tireSet.$inferSelect) => {
     const limit = limitFor(s, prefs.jurisdiction, today);
     // The overview shows conditions only: no wear projection.
     const views = rows.tires
       .filter((t) => t.t.setId === s.id)
       .map((t) => tireView({ tire: t.t, set: s, readings: readingsByTire.get(t.t.id) ?? [], limitMm: limit.minMm, odometerHistory: [], project: false, today }));
-    return setCondition(views);
+    return { limitMm: limit.minMm, views };
+  };
+  const condOf = (s: typeof tireSet.$inferSelect) => setCondition(viewsOf(s).views);
+  const mountedOf = (s: typeof tireSet.$inferSelect) => {
+    const { limitMm, views } = viewsOf(s);
+    const tiresOut = views.map((t) => ({ id: t.id, position: t.position, newDepthMm: t.newDepthMm, latest: t.latest, condition: t.condition }));
+    return { id: s.id, label: s.label, kind: s.kind, size: s.size, condition: setCondition(views), limitMm, tires: tiresOut };
   };
 
   return {
@@ -466,7 +481,7 @@ export async function listVehicleSummaries({ userId, today }: { userId: string; 
         model: v.model,
         year: v.year,
         odometerUnit: v.odometerUnit,
-        mountedSet: mounted ? { id: mounted.id, label: mounted.label, kind: mounted.kind, size: mounted.size, condition: condOf(mounted) } : null,
+        mountedSet: mounted ? mountedOf(mounted) : null,
         storedSets: mine
           .filter((s) => s.state === "stored")
           .map((s) => ({ id: s.id, label: s.label, kind: s.kind, storageLocation: s.storageLocation, condition: condOf(s) })),

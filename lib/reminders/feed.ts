@@ -6,6 +6,7 @@ import ical, { ICalAlarmType } from "ical-generator";
 import { CAUTION, type ReminderItem } from "@/lib/tires";
 import { planAllows, type Plan } from "@/lib/plan";
 import { logbookPath, vehiclePath, whatToDo } from "./describe";
+import { conditionTextFor } from "./severity";
 
 export const FEED_NAME = "Fourpatch tire reminders";
 
@@ -47,6 +48,8 @@ export function buildFeed({
   for (const item of items) {
     const link = `${baseUrl}${logbookPath(item)}`;
     const description = [
+      // The condition code in characters ("▰▱▱ Plan to replace"): calendars show no colour.
+      `Condition: ${conditionTextFor(item.severity)}`,
       item.explanation.replace(CAUTION, "").trim(),
       `What to do: ${whatToDo(item.kind)}`,
       `Set: ${link}`,

@@ -14,7 +14,7 @@ import "server-only";
 //    reports (not an exception) clears the stamp, to be retried next run.
 import { createHash, randomUUID } from "node:crypto";
 import { claimDeliveries, computeFor, driversForDelivery, markDeliveries, reminderProfile } from "@/db/queries/reminders";
-import { conditionLabelFor } from "@/lib/reminders/severity";
+import { badgeFor, conditionLabelFor } from "@/lib/reminders/severity";
 import ReminderDigestEmail from "@/emails/reminder-digest";
 import { sendEmail, type SendEmailInput, type SendEmailResult } from "@/lib/email/send";
 import { oneClickUnsubscribeUrl, unsubscribeUrl } from "@/lib/email/unsubscribe";
@@ -115,6 +115,7 @@ function digestEmail({ to, name, userId, items }: { to: string; name: string; us
         subject: i.subject,
         dateLabel: formatDay(i.date),
         severityLabel: conditionLabelFor(i.severity),
+        condition: badgeFor(i.severity),
         overdue: i.overdue,
         reason: i.explanation.replace(CAUTION, "").trim(),
         whatToDo: whatToDo(i.kind),

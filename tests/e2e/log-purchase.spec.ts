@@ -140,12 +140,12 @@ test.describe("a household driver logs a new tire purchase", () => {
   });
 });
 
-test("the demo's set page shows the wear chart with the limit line and the inner-shoulder diagnosis", async ({ page }) => {
+test("the demo's set page shows the wear chart with the zone below the limit and the inner-shoulder diagnosis", async ({ page }) => {
   await new SessionPages(page).signInAndLand(demoAccounts.ada.email, "/vehicles");
   await page.getByRole("link", { name: "Summer tires" }).first().click();
   await expect(page.getByRole("heading", { name: "Summer tires" })).toBeVisible();
   await expect(page.getByText("Worn on the inner shoulder.")).toBeVisible();
-  await expect(page.getByTestId("wear-chart").getByText(/^Limit/)).toBeVisible();
+  await expect(page.getByTestId("wear-chart").getByText(/^Below the 1\.6 mm limit$/)).toBeVisible();
   expect(await new LogbookPages(page).chartMarkers().count()).toBeGreaterThan(20);
   await page.screenshot({ path: `${SCREENS}/desktop-demo-set.png`, fullPage: true });
 });

@@ -9,7 +9,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { listVehicleSummaries } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
-import { distanceUnitFor, formatDistance } from "@/lib/units";
+import { depthUnitFor, distanceUnitFor, formatDistance } from "@/lib/units";
+import { SetAtAGlance } from "@/components/visual/set-at-a-glance";
 import { todayIso } from "@/lib/validation/logbook";
 
 export const dynamic = "force-dynamic";
@@ -19,6 +20,7 @@ export default async function VehiclesOverviewPage() {
   if (!session) redirect("/sign-in?next=/vehicles");
   const { vehicles, prefs } = await listVehicleSummaries({ userId: session.user.id, today: todayIso() });
   const unit = distanceUnitFor(prefs.units);
+  const depthUnit = depthUnitFor(prefs.units);
   return (
     <>
       <PageHeader
@@ -58,6 +60,7 @@ export default async function VehiclesOverviewPage() {
                   </div>
                   {v.mountedSet?.condition ? <ConditionBadge condition={v.mountedSet.condition} /> : null}
                 </div>
+                {v.mountedSet ? <SetAtAGlance tires={v.mountedSet.tires} limitMm={v.mountedSet.limitMm} depthUnit={depthUnit} /> : null}
                 <dl className="space-y-2 text-sm">
                   <div className="flex gap-2">
                     <dt className="sr-only">On the car</dt>

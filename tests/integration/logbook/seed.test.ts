@@ -48,7 +48,14 @@ describe("demo logbook", () => {
       expect(v.mountedSet?.condition).toBeTruthy();
       expect(v.nextReminder?.date).toMatch(/^\d{4}-\d{2}-\d{2}$/);
       expect(v.lastCheck).not.toBeNull();
+      // What the overview's tread-profile glyphs draw: each tire's latest grooves against the set's limit.
+      expect(v.mountedSet?.tires.map((t) => t.position).sort()).toEqual(["front_left", "front_right", "rear_left", "rear_right"]);
+      expect(v.mountedSet?.tires.every((t) => t.latest && t.latest.innerMm != null && t.latest.centreMm != null && t.latest.outerMm != null)).toBe(true);
+      expect(v.mountedSet?.limitMm).toBeGreaterThan(0);
     }
+    // The demo car's front left wears on its inner shoulder: its inner groove is the shallowest.
+    const fl = overview.vehicles[0].mountedSet?.tires.find((t) => t.position === "front_left")?.latest;
+    expect(fl!.innerMm!).toBeLessThan(Math.min(fl!.centreMm!, fl!.outerMm!));
     // The van's all-season set is past 5 years: "watch" by age [practice, trade-facts §3].
     expect(overview.vehicles[1].mountedSet?.condition).toBe("watch");
     const tomas = await listVehicleSummaries({ userId: ids.tomas, today });

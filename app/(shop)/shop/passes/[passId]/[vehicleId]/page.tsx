@@ -1,4 +1,4 @@
-import { Paperclip } from "lucide-react";
+import { Paperclip, PencilLine } from "lucide-react";
 import { notFound } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
 import { ShopFittedSetForm } from "@/components/passes/shop-fitted-set-form";
@@ -6,12 +6,13 @@ import { ShopServiceForm } from "@/components/passes/shop-service-form";
 import { TimeLeft } from "@/components/passes/time-left";
 import { Card } from "@/components/ui/card";
 import { ConditionBadge } from "@/components/ui/condition-badge";
+import { VehiclePlan } from "@/components/passes/vehicle-plan";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { getVehicleLogbook, type SetView } from "@/db/queries/logbook";
 import { resolvePassAccess } from "@/db/queries/passes";
 import { getSession } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { depthUnitFor, formatDepth, formatDistance } from "@/lib/units";
+import { depthUnitFor, formatDistance } from "@/lib/units";
 import { POSITION_LABELS, SERVICE_KIND_LABELS, SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
 
@@ -21,8 +22,9 @@ function setTitle(s: SetView) {
   return s.label ?? `${SET_KIND_LABELS[s.kind]} set`;
 }
 
-// The technician's view of one vehicle under a pass: the tires on the car
-// first, the form to record work next, history after. Checked afresh on
+// The technician's view of one vehicle under a pass: a plan of the car with
+// each tire's tread profile at its wheel first, the form to record work next,
+// history after; the pass strip (time left, "Record work") stays in view. Checked afresh on
 // every request; each load is written to the driver's access log.
 export default async function PassLogbookPage({ params }: { params: Promise<{ passId: string; vehicleId: string }> }) {
   const { passId, vehicleId } = await params;
@@ -63,28 +65,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
           On the car{onCar ? `: ${setTitle(onCar)} · ${onCar.size}` : ""}
         </h2>
         {onCar ? (
-          <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-4">
-            {onCar.tires.map((t) => (
-              <li key={t.id}>
-                <Card className="space-y-2 p-4" data-testid={`tire-${t.position}`}>
-                  <div className="flex items-center justify-between gap-2">
-                    <p className="text-lg font-bold">{POSITION_LABELS[t.position]}</p>
-                    {t.condition ? <ConditionBadge condition={t.condition} /> : <span className="text-sm text-asphalt-600">No reading</span>}
-                  </div>
-                  <p className="font-mono text-base">{t.dotCode ?? "No DOT code logged"}</p>
-                  <p className="text-asphalt-700">
-                    {t.dot && t.dot.ok ? `Week ${t.dot.week} of ${t.dot.year}` : t.dot && !t.dot.ok ? t.dot.error : "Date unknown"}
-                    {t.age ? ` · ${t.age.years} y ${t.age.months} m old` : ""}
-                  </p>
-                  <p className="text-2xl font-bold tabular-nums">
-                    {t.depthMm != null ? formatDepth(t.depthMm, depthUnit) : "—"}
-                    <span className="ml-2 text-sm font-normal text-asphalt-600">{t.latest ? `checked ${t.latest.checkedOn}` : "no check yet"}</span>
-                  </p>
-                  {t.pattern && t.pattern.kind !== "even" ? <p className="text-sm text-asphalt-700">{t.pattern.likelyCause}</p> : null}
-                </Card>
-              </li>
-            ))}
-          </ul>
+          <VehiclePlan tires={onCar.tires} limitMm={onCar.limit.minMm} depthUnit={depthUnit} measurable={canAdd} />
         ) : (
           <p className="text-asphalt-600">The logbook has no set on the car.</p>
         )}
@@ -93,7 +74,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
       </section>
 
       {canAdd ? (
-        <Card className="mt-6">
+        <Card className="mt-6 scroll-mt-28" id="record-work">
           <ShopServiceForm
             ctx={{
               passId,
@@ -193,14 +174,23 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
         </section>
       ) : null}
 
-      <div className="fixed inset-x-0 bottom-0 z-40 border-t-2 border-groove-700 bg-white/95 backdrop-blur" role="region" aria-label="Pass">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-4 gap-y-1 px-4 py-3">
-          <TimeLeft endsAt={access.endsAt.toISOString()} serverNow={now.toISOString()} refreshOnEnd={false} className="text-lg" />
-          <span className="text-asphalt-700">
-            <span className="hidden sm:inline">{v.nickname} · </span>
-            {SCOPE_LABEL[access.scope]}
-            <span className="hidden md:inline"> · {access.shopName}</span>
-          </span>
+      {/* The pass strip: time left always in view, and the record-work form one tap away. */}
+      <div className="fixed inset-x-0 bottom-0 z-40 border-t-4 border-groove-500 bg-asphalt-900 text-white print:hidden" role="region" aria-label="Pass">
+        <div className="mx-auto flex max-w-6xl items-center justify-between gap-3 px-4 py-2">
+          <div className="min-w-0">
+            <TimeLeft endsAt={access.endsAt.toISOString()} serverNow={now.toISOString()} refreshOnEnd={false} onDark className="text-base sm:text-lg" />
+            <p className="truncate text-xs text-asphalt-300 sm:text-sm">
+              <span className="hidden sm:inline">{v.nickname} · </span>
+              {SCOPE_LABEL[access.scope]}
+              <span className="hidden md:inline"> · {access.shopName}</span>
+            </p>
+          </div>
+          {canAdd ? (
+            <a href="#record-work" className="inline-flex min-h-12 shrink-0 items-center gap-2 rounded bg-groove-500 px-4 text-base font-bold text-asphalt-950 no-underline hover:bg-groove-400">
+              <PencilLine aria-hidden className="size-5" />
+              Record work
+            </a>
+          ) : null}
         </div>
       </div>
     </div>
