@@ -5,6 +5,7 @@
 import { revalidatePath } from "next/cache";
 import { headers } from "next/headers";
 import { z } from "zod";
+import { AppError } from "@/lib/errors";
 import { fakeStripeAllowed } from "@/lib/billing/fake-gate";
 import { advanceToRenewal, FakeStripeError, payCheckoutSession, payInvoice, redeliverEvent, setFailNextRenewal } from "@/lib/billing/fake/engine";
 
@@ -18,7 +19,7 @@ const cardSchema = z.object({
 export type CardFormResult = { ok: true; redirectTo?: string } | { ok: false; message: string; field?: string };
 
 async function gate() {
-  if (!(await fakeStripeAllowed(await headers()))) throw new Error("Not found");
+  if (!(await fakeStripeAllowed(await headers()))) throw new AppError("not_found", "Not found.");
 }
 
 export async function payCheckoutAction(input: z.input<typeof cardSchema>): Promise<CardFormResult> {
@@ -50,25 +51,25 @@ export async function payInvoiceAction(input: z.input<typeof cardSchema>): Promi
 
 const subAction = z.object({ id: z.string().min(1).max(100) });
 
-export async function advanceAction(form: FormData) {
+/** A developer page's button: an unknown id changes nothing (the page shows the state as it is); a malformed one is a 422. */
+async function onObject(form: FormData, fn: (id: string) => Promise<unknown>, path: string) {
   await gate();
-  const { id } = subAction.parse({ id: form.get("id") });
-  await advanceToRenewal(id).catch((e) => {
+  const p = subAction.safeParse({ id: form.get("id") });
+  if (!p.success) throw new AppError("invalid", "That id is not valid.", { id: ["Not a valid id."] });
+  await fn(p.data.id).catch((e) => {
     if (!(e instanceof FakeStripeError)) throw e;
   });
-  revalidatePath("/", "layout");
+  revalidatePath(path, path === "/" ? "layout" : undefined);
+}
+
+export async function advanceAction(form: FormData) {
+  await onObject(form, advanceToRenewal, "/");
 }
 
 export async function failNextAction(form: FormData) {
-  await gate();
-  const { id } = subAction.parse({ id: form.get("id") });
-  await setFailNextRenewal(id, form.get("fail") === "on");
-  revalidatePath("/dev/stripe");
+  await onObject(form, (id) => setFailNextRenewal(id, form.get("fail") === "on"), "/dev/stripe");
 }
 
 export async function redeliverAction(form: FormData) {
-  await gate();
-  const { id } = subAction.parse({ id: form.get("id") });
-  await redeliverEvent(id);
-  revalidatePath("/dev/stripe");
+  await onObject(form, redeliverEvent, "/dev/stripe");
 }
