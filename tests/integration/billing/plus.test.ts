@@ -133,6 +133,11 @@ describe("webhook signatures and replays", () => {
       expect(json.error.fields, name).toHaveProperty("stripe-signature");
     }
     expect((await db.select().from(billingEvent)).length).toBe(before);
+
+    // Correctly signed but about a subscription Stripe does not know: recorded, ignored, 200 (so Stripe stops retrying).
+    const ok = await postWebhook(body, sign(body));
+    expect(ok.status).toBe(200);
+    expect(await ok.json()).toMatchObject({ outcome: "ignored" });
   });
 
   it("applies a replayed event once: same state, no second e-mail", async () => {
