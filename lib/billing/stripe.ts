@@ -27,7 +27,8 @@ export function stripe(): Stripe {
       host: base.hostname,
       port: Number(base.port || (protocol === "https" ? 443 : 80)),
       protocol,
-      maxNetworkRetries: 0,
+      // As with Stripe: a 409 for a request still in flight under the same idempotency key is retried, and then answered with the first result.
+      maxNetworkRetries: 2,
       telemetry: false,
     });
     clientBase = base.href;

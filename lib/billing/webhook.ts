@@ -12,9 +12,8 @@ import PlusReceiptEmail from "@/emails/plus-receipt";
 import { sendEmail } from "@/lib/email/send";
 import { oneClickUnsubscribeUrl, unsubscribeUrl } from "@/lib/email/unsubscribe";
 import { appUrl } from "@/lib/env";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { emailOptOut, user } from "@/db/schema";
-import { and } from "drizzle-orm";
 import { formatMoney } from "./config";
 import { refreshSubscription, toStoredSubscription } from "./service";
 
@@ -67,7 +66,14 @@ export async function applyEvent(event: Stripe.Event): Promise<WebhookOutcome> {
       else referenceUser = null;
     }
   }
-  const fetched = subscriptionId ? await refreshSubscription({ subscriptionId, userId: referenceUser ?? undefined }) : null;
+  // A subscription Stripe does not know (another account's event, a deleted test object) is recorded and ignored;
+  // any other failure throws, so the route answers 503 and Stripe retries later.
+  const fetched = subscriptionId
+    ? await refreshSubscription({ subscriptionId, userId: referenceUser ?? undefined }).catch((err: { statusCode?: number; code?: string }) => {
+        if (err?.statusCode === 404 && err.code === "resource_missing") return null;
+        throw err;
+      })
+    : null;
   let ownerId: string | null = null;
   if (fetched?.owner) {
     // Only a driver whose customer we created may receive the subscription.

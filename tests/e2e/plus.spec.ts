@@ -107,10 +107,20 @@ test("a Free driver buys Plus, uses it, cancels, resumes and switches to yearly"
   await billing.resume();
   await expect(page.getByText("Renews on", { exact: true })).toBeVisible();
 
+  // Each question can be declined and changes nothing.
+  await page.getByRole("button", { name: "Cancel Plus" }).click();
+  await page.getByRole("button", { name: "Keep Plus" }).click();
+  await expect(page.getByText("Renews on", { exact: true })).toBeVisible();
+  await page.getByRole("button", { name: "Switch to yearly" }).click();
+  await page.getByRole("button", { name: "Keep monthly" }).click();
+  await expect(page.getByTestId("plan-price")).toContainText("per month");
+
   // Monthly → yearly: asks first, then a yearly price and a second invoice.
   await billing.switchTo("yearly");
   await expect(page.getByTestId("plan-price")).toContainText("per year");
   await expect(billing.invoices()).toHaveCount(2);
+  await page.getByRole("button", { name: "Switch to monthly" }).click();
+  await page.getByRole("button", { name: "Keep yearly" }).click();
 
   // No sideways scrolling on the phone.
   const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
@@ -133,6 +143,10 @@ test("a Free driver buys Plus, uses it, cancels, resumes and switches to yearly"
 });
 
 test("a failed renewal shows the payment problem and the fix; a declined card leaves a second driver on Free", async ({ page }) => {
+  // Signed out, Pricing leads to an account first.
+  await page.goto("/pricing");
+  await page.getByRole("link", { name: "Start free, then buy Plus" }).click();
+  await expect(page).toHaveURL(/\/sign-up$/);
   await signUpNew(page, "Odile Brackwater");
   const billing = new BillingPages(page);
   await billing.open();
@@ -154,6 +168,10 @@ test("a failed renewal shows the payment problem and the fix; a declined card le
   await expect(billing.plan()).toHaveText("Your plan: Plus");
   await page.goto("/dev/stripe");
   const mine = page.getByTestId("fake-subscription").filter({ hasText: "odile-" });
+  await mine.getByRole("button", { name: "Make the next renewal fail" }).click();
+  await expect(mine.getByText("next renewal will fail")).toBeVisible();
+  await mine.getByRole("button", { name: "Let the next renewal pay" }).click();
+  await expect(mine.getByText("next renewal will fail")).toHaveCount(0);
   await mine.getByRole("button", { name: "Make the next renewal fail" }).click();
   await expect(mine.getByText("next renewal will fail")).toBeVisible();
   await mine.getByRole("button", { name: "Advance to renewal" }).click();

@@ -55,8 +55,8 @@ export default async function PricingPage() {
                 />
               </div>
             ) : p.name === "Plus" ? (
-              <Link href="/sign-up?next=/account/billing" className={buttonVariants({ className: "mt-6", variant: "primary" })}>
-                Create an account, then buy Plus
+              <Link href="/sign-up" className={buttonVariants({ className: "mt-6", variant: "primary" })}>
+                Start free, then buy Plus
               </Link>
             ) : (
               <Link href={signedIn ? "/vehicles" : "/sign-up"} className={buttonVariants({ className: "mt-6", variant: "secondary" })}>

@@ -10,7 +10,9 @@ import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { billingEvent, billingSubscription, driverProfile, fakeOutbox, fakeStripeObject } from "@/db/schema";
+import { listAccounts } from "@/db/queries/admin";
 import { currentSubscription, planOf, storeSubscription } from "@/db/queries/billing";
+import { sessionFromRequest } from "@/lib/auth/session";
 import { POST as webhookPOST } from "@/app/api/stripe/webhook/route";
 import { PUT as settingsPUT } from "@/app/api/reminders/settings/route";
 import { DELETE as accountDELETE } from "@/app/api/account/route";
@@ -55,10 +57,8 @@ describe("checkout through the SDK against the local fake", () => {
     expect(prices.year.amount).toBeGreaterThan(prices.month.amount);
 
     const u = await signUp({ name: "Orla Fenwick" });
-    const [a, b] = await Promise.all([startCheckout({ userId: u.id, interval: "month" }), startCheckout({ userId: u.id, interval: "month" })]).catch(async () => {
-      // Stripe answers the second of two simultaneous requests with the same key by a 409; the driver's retry gets the first session.
-      return [await startCheckout({ userId: u.id, interval: "month" }), await startCheckout({ userId: u.id, interval: "month" })];
-    });
+    // Two clicks at once: the second request meets the first's idempotency key (a 409 while it is in flight, which the SDK retries) and gets the same session.
+    const [a, b] = await Promise.all([startCheckout({ userId: u.id, interval: "month" }), startCheckout({ userId: u.id, interval: "month" })]);
     expect(a.sessionId).toBe(b.sessionId);
     const sessions = await db.select().from(fakeStripeObject).where(eq(fakeStripeObject.objectType, "checkout.session"));
     expect(sessions.filter((s) => s.data.client_reference_id === u.id)).toHaveLength(1);
@@ -110,6 +110,11 @@ describe("checkout through the SDK against the local fake", () => {
     const invoices = await invoicesOf({ userId: u.id });
     expect(invoices).toHaveLength(1);
     expect(invoices[0]).toMatchObject({ status: "paid", currency: "eur" });
+    // The operator's account list shows the same plan, from the same stored subscription.
+    const ops = await signUp({ name: "Ops Tester", admin: true });
+    const accounts = await listAccounts({ actor: await sessionFromRequest(request("/", { as: ops })) });
+    expect(accounts.find((a) => a.id === u.id)?.plan).toBe("plus");
+    expect(accounts.find((a) => a.id === ops.id)?.plan).toBe("free");
   });
 });
 
@@ -135,6 +140,11 @@ describe("webhook signatures and replays", () => {
       expect(json.error.fields, name).toHaveProperty("stripe-signature");
     }
     expect((await db.select().from(billingEvent)).length).toBe(before);
+
+    // Correctly signed but about a subscription Stripe does not know: recorded, ignored, 200 (so Stripe stops retrying).
+    const ok = await postWebhook(body, sign(body));
+    expect(ok.status).toBe(200);
+    expect(await ok.json()).toMatchObject({ outcome: "ignored" });
   });
 
   it("applies a replayed event once: same state, no second e-mail", async () => {

@@ -5,7 +5,7 @@
 import { and, eq, sql } from "drizzle-orm";
 import { afterEach, describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { billingSubscription, driverProfile, emailOptOut, fakeOutbox, reminderDelivery } from "@/db/schema";
+import { billingSubscription, emailOptOut, fakeOutbox, reminderDelivery } from "@/db/schema";
 import { POST as cronPOST } from "@/app/api/cron/reminders/route";
 import { POST as oneClickPOST } from "@/app/unsubscribe/[token]/one-click/route";
 import { changeSubscription } from "@/app/unsubscribe/[token]/actions";

@@ -145,7 +145,7 @@ export default async function BillingPage({ searchParams }: { searchParams: Prom
                     {i.periodStart && i.periodEnd ? ` · ${day(i.periodStart)} – ${day(i.periodEnd)}` : ""}
                   </span>
                 </span>
-                <span className="text-right">
+                <span className="sm:text-right">
                   <span className="block font-semibold">{money(i.amount, i.currency)}</span>
                   <span className={i.status === "open" ? "block text-sm font-semibold text-condition-replace" : "block text-sm text-asphalt-600"}>
                     {STATUS_WORDS[i.status ?? ""] ?? i.status}
