@@ -2,6 +2,8 @@ import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import type { ReactNode } from "react";
 import { Toaster } from "sonner";
+import { FormatProvider } from "@/components/format/format-provider";
+import { viewerPrefs } from "@/lib/format/server";
 import "./globals.css";
 
 const sans = localFont({
@@ -25,11 +27,12 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#1e625c" };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const prefs = await viewerPrefs();
   return (
     <html lang="en" className={`${sans.variable} ${mono.variable}`}>
       <body className="min-h-dvh font-sans">
-        {children}
+        <FormatProvider prefs={prefs}>{children}</FormatProvider>
         <Toaster position="top-center" richColors closeButton />
       </body>
     </html>

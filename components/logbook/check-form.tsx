@@ -13,10 +13,11 @@ import { Card, CardTitle } from "@/components/ui/card";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { COIN_RESULTS, coinLabel, type CoinResult } from "@/lib/tires";
-import { distanceToKm, formatDistance, type DepthUnit, type PressureUnit } from "@/lib/units";
+import { distanceToKm, type DepthUnit, type PressureUnit } from "@/lib/units";
 import { POSITION_LABELS, todayIso, treadCheckSchema, type PositionValue } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
 import { setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 
 export type CheckSetChoice = {
   id: string;
@@ -59,6 +60,7 @@ export function CheckForm({
   pressureUnit: PressureUnit;
   preselect?: string;
 }) {
+  const f = useFormat();
   const router = useRouter();
   const queryClient = useQueryClient();
   const [error, setError] = useState<string | null>(null);
@@ -146,7 +148,7 @@ export function CheckForm({
           </Field>
           <Field
             label={`Odometer (${vehicle.odometerUnit})`}
-            hint={lastOdometer ? `Last: ${formatDistance(lastOdometer.odometerKm, vehicle.odometerUnit)}` : undefined}
+            hint={lastOdometer ? `Last: ${f.distance(lastOdometer.odometerKm, vehicle.odometerUnit)}` : undefined}
             error={err("odometer")}
           >
             {({ id, describedBy, invalid }) => <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} {...register("odometer")} />}

@@ -28,7 +28,8 @@ import {
   type PositionValue,
 } from "@/lib/validation/logbook";
 import { api, ApiError, keys, uploadFile } from "./api";
-import { formatBytes, setTitle } from "./format";
+import { setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 import { DotPreview, SizePreview } from "./live-decode";
 
 export type VehicleChoice = {
@@ -76,6 +77,7 @@ const coreKind = (k: Values["kind"]) => k.replace("_", "-") as SetKind;
 type Upload = { file: File; kind: "receipt" | "photo"; progress: number; error?: string; done?: boolean };
 
 export function PurchaseForm({ vehicles, units, preselect }: { vehicles: VehicleChoice[]; units: UnitSystem; preselect?: string }) {
+  const f = useFormat();
   const router = useRouter();
   const queryClient = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
@@ -460,7 +462,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
               <li key={`${u.file.name}-${i}`} className="rounded border border-asphalt-200 p-2 text-sm">
                 <div className="flex items-center justify-between gap-2">
                   <span className="min-w-0 truncate">
-                    {u.kind === "receipt" ? "Receipt" : "Photo"}: {u.file.name} ({formatBytes(u.file.size)})
+                    {u.kind === "receipt" ? "Receipt" : "Photo"}: {u.file.name} ({f.bytes(u.file.size)})
                   </span>
                   {!u.done ? (
                     <button type="button" className="inline-flex min-h-11 min-w-11 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Remove ${u.file.name}`} onClick={() => setUploads((all) => all.filter((_, j) => j !== i))}>

@@ -12,15 +12,17 @@ import { ConditionBadge } from "@/components/ui/condition-badge";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetDetail } from "@/db/queries/logbook";
-import { depthUnitFor, formatDepth, formatDistance, formatPressure } from "@/lib/units";
+import { depthUnitFor, } from "@/lib/units";
 import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/logbook";
 import { api, keys } from "./api";
-import { formatDate, formatMoney, linkClass, setTitle } from "./format";
+import { linkClass, setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 import { SetSettings } from "./set-settings";
 import { TireList } from "./tire-list";
 import { WearChart } from "./wear-chart";
 
 export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: string }) {
+  const f = useFormat();
   const { data } = useQuery({ queryKey: keys.set(initial.set.id), queryFn: () => api<SetDetail>(`/api/sets/${initial.set.id}`), initialData: initial });
   const d = data ?? initial;
   const s = d.set;
@@ -59,16 +61,16 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
           <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
             <dt className="text-asphalt-600">Depth limit</dt>
             <dd>
-              {formatDepth(s.limit.minMm, depthUnit)} — {s.limit.source}
+              {f.depth(s.limit.minMm, depthUnit)} — {s.limit.source}
               {s.limit.legal ? " (legal minimum)" : ""}
             </dd>
             <dt className="text-asphalt-600">Bought</dt>
             <dd>
-              {formatDate(s.purchasedOn)}
+              {f.date(s.purchasedOn)}
               {s.seller ? ` from ${s.seller}` : ""}
             </dd>
             <dt className="text-asphalt-600">Price</dt>
-            <dd>{formatMoney(s.priceCents, s.currency)}</dd>
+            <dd>{f.money(s.priceCents, s.currency)}</dd>
           </dl>
           {s.limit.note ? <p className="text-xs text-asphalt-600">{s.limit.note}</p> : null}
           {s.axleAdvice.length ? (
@@ -125,15 +127,15 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
                 {(showAll ? d.checks : d.checks.slice(0, 3)).flatMap((c) =>
                   c.readings.map((r) => (
                     <tr key={`${c.id}-${r.tireId}`} className="border-t border-asphalt-200">
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDate(c.checkedOn)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDistance(c.odometerKm, distanceUnit)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{f.date(c.checkedOn)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{f.distance(c.odometerKm, distanceUnit)}</td>
                       <td className="px-3 py-2">{positionOf.get(r.tireId) ?? "—"}</td>
                       <td className="px-3 py-2">
                         {r.approximate
-                          ? `about ${formatDepth(r.centreMm, depthUnit)} (coin)`
-                          : [r.innerMm, r.centreMm, r.outerMm].map((x) => formatDepth(x, depthUnit)).join(" · ")}
+                          ? `about ${f.depth(r.centreMm, depthUnit)} (coin)`
+                          : [r.innerMm, r.centreMm, r.outerMm].map((x) => f.depth(x, depthUnit)).join(" · ")}
                       </td>
-                      <td className="px-3 py-2">{formatPressure(r.pressureKpa, d.viewer.pressureUnit)}</td>
+                      <td className="px-3 py-2">{f.pressure(r.pressureKpa, d.viewer.pressureUnit)}</td>
                       <td className="px-3 py-2">{c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"}</td>
                     </tr>
                   )),

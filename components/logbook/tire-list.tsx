@@ -1,12 +1,14 @@
+"use client";
 // A set's tires: position, DOT week, age, depth and condition, as a list
 // that reads on a phone and as a grid on a desktop.
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import type { TireView } from "@/db/queries/logbook-view";
-import { formatDepth, type DepthUnit } from "@/lib/units";
+import type { DepthUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/logbook";
-import { formatAge, formatDate } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 
 export function TireList({ tires, depthUnit, showPattern = false }: { tires: TireView[]; depthUnit: DepthUnit; showPattern?: boolean }) {
+  const f = useFormat();
   if (tires.length === 0) return <p className="text-sm text-asphalt-600">No tires recorded for this set.</p>;
   return (
     <ul className="grid gap-2 sm:grid-cols-2" aria-label="Tires">
@@ -20,21 +22,21 @@ export function TireList({ tires, depthUnit, showPattern = false }: { tires: Tir
             <dt className="text-asphalt-600">DOT</dt>
             <dd className="font-mono">{t.dotCode ?? "not recorded"}</dd>
             <dt className="text-asphalt-600">Made</dt>
-            <dd>{t.dot?.ok ? `week ${t.dot.week} of ${t.dot.year} (from ${formatDate(t.dot.weekStart)})` : t.dot ? t.dot.error : "unknown"}</dd>
+            <dd>{t.dot?.ok ? `week ${t.dot.week} of ${t.dot.year} (from ${f.date(t.dot.weekStart)})` : t.dot ? t.dot.error : "unknown"}</dd>
             <dt className="text-asphalt-600">Age</dt>
             <dd>
-              {formatAge(t.age)}
-              {t.replaceFrom ? <span className="text-asphalt-600"> · replace by {formatDate(t.replaceFrom)}</span> : null}
+              {f.age(t.age)}
+              {t.replaceFrom ? <span className="text-asphalt-600"> · replace by {f.date(t.replaceFrom)}</span> : null}
             </dd>
             <dt className="text-asphalt-600">Depth</dt>
             <dd>
               {t.latest ? (
                 <>
                   {t.latest.approximate ? "about " : ""}
-                  {formatDepth(t.depthMm, depthUnit)} on {formatDate(t.latest.checkedOn)}
+                  {f.depth(t.depthMm, depthUnit)} on {f.date(t.latest.checkedOn)}
                 </>
               ) : t.depthMm != null ? (
-                <>{formatDepth(t.depthMm, depthUnit)} when new</>
+                <>{f.depth(t.depthMm, depthUnit)} when new</>
               ) : (
                 "no check yet"
               )}
@@ -51,7 +53,7 @@ export function TireList({ tires, depthUnit, showPattern = false }: { tires: Tir
               <>
                 <dt className="text-asphalt-600">At limit</dt>
                 <dd>
-                  {t.projection.projectedDate ? `reached around ${formatDate(t.projection.projectedDate)}` : "no date yet"}
+                  {t.projection.projectedDate ? `reached around ${f.date(t.projection.projectedDate)}` : "no date yet"}
                   {t.projection.method === "typical-rate" ? " (estimated from a typical wear rate)" : ` (confidence: ${t.projection.confidence})`}
                 </dd>
               </>

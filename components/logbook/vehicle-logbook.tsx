@@ -6,7 +6,7 @@ import { AccessLogTable } from "@/components/passes/access-log-table";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { buttonVariants } from "@/components/ui/button-variants";
@@ -16,10 +16,11 @@ import { Field, Input } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
-import { depthUnitFor, formatDistance } from "@/lib/units";
+import { depthUnitFor } from "@/lib/units";
 import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
-import { formatBytes, formatDate, formatMoney, linkClass, setTitle } from "./format";
+import { linkClass, setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 import { HistoryTable, historyRows } from "./history-table";
 import { ServiceEntryForm } from "./service-entry-form";
 import { TireList } from "./tire-list";
@@ -39,6 +40,7 @@ export function VehicleLogbookView({
   queryUrl?: string;
   canManage?: boolean;
 }) {
+  const f = useFormat();
   const id = initial.vehicle.id;
   const { data } = useQuery({ queryKey: keys.vehicle(id), queryFn: () => api<VehicleLogbook>(queryUrl ?? `/api/vehicles/${id}`), initialData: initial });
   const book = data ?? initial;
@@ -46,12 +48,14 @@ export function VehicleLogbookView({
   const depthUnit = depthUnitFor(book.viewer.units);
   const distanceUnit = v.odometerUnit;
   const mounted = book.sets.find((s) => s.state === "mounted") ?? null;
+  // The table needs the same array until the logbook itself changes (see HistoryTable).
+  const rows = useMemo(() => historyRows(book, depthUnit, f), [book, depthUnit, f]);
 
   return (
     <>
       <PageHeader
         title={v.nickname}
-        description={`${v.make} ${v.model}${v.year ? ` · ${v.year}` : ""}${v.plate ? ` · ${v.plate}` : ""}${book.lastOdometer ? ` · ${formatDistance(book.lastOdometer.odometerKm, distanceUnit)} on ${formatDate(book.lastOdometer.date)}` : ""}`}
+        description={`${v.make} ${v.model}${v.year ? ` · ${v.year}` : ""}${v.plate ? ` · ${v.plate}` : ""}${book.lastOdometer ? ` · ${f.distance(book.lastOdometer.odometerKm, distanceUnit)} on ${f.date(book.lastOdometer.date)}` : ""}`}
         actions={
           canManage ? (
           <>
@@ -90,7 +94,7 @@ export function VehicleLogbookView({
         {canManage ? (
           <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
         ) : null}
-        <HistoryTable rows={historyRows(book, depthUnit)} distanceUnit={distanceUnit} />
+        <HistoryTable rows={rows} distanceUnit={distanceUnit} />
       </section>
 
       <section aria-labelledby="files-h" className="mb-8 space-y-3">
@@ -131,6 +135,7 @@ function SetCard({
   files: VehicleLogbook["attachments"];
   canManage: boolean;
 }) {
+  const f = useFormat();
   const state =
     set.state === "mounted" ? "On the car" : set.state === "stored" ? `Stored${set.storageLocation ? ` at ${set.storageLocation}` : ""}` : "Retired";
   return (
@@ -148,9 +153,9 @@ function SetCard({
           </h3>
           <p className="text-sm text-asphalt-600">
             {SET_KIND_LABELS[set.kind]} · {set.size} · {state}
-            {set.purchasedOn ? ` · bought ${formatDate(set.purchasedOn)}` : ""}
+            {set.purchasedOn ? ` · bought ${f.date(set.purchasedOn)}` : ""}
             {set.seller ? ` from ${set.seller}` : ""}
-            {set.priceCents != null ? ` · ${formatMoney(set.priceCents, set.currency)}` : ""}
+            {set.priceCents != null ? ` · ${f.money(set.priceCents, set.currency)}` : ""}
           </p>
         </div>
         {set.condition ? <ConditionBadge condition={set.condition} detail="set" /> : null}
@@ -233,6 +238,7 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
 }
 
 function FileList({ files }: { files: VehicleLogbook["attachments"] }) {
+  const fmt = useFormat();
   return (
     <ul className="flex flex-wrap gap-2" aria-label="Files">
       {files.map((f) => (
@@ -240,7 +246,7 @@ function FileList({ files }: { files: VehicleLogbook["attachments"] }) {
           <a href={`/api/attachments/${f.id}`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center gap-2 rounded border border-asphalt-200 bg-white px-3 text-sm">
             {f.mimeType.startsWith("image/") ? <ImageIcon aria-hidden className="size-4" /> : <FileText aria-hidden className="size-4" />}
             <span>
-              {f.kind === "receipt" ? "Receipt" : f.kind === "photo" ? "Photo" : "Document"}: {f.fileName} <span className="text-asphalt-600">({formatBytes(f.sizeBytes)})</span>
+              {f.kind === "receipt" ? "Receipt" : f.kind === "photo" ? "Photo" : "Document"}: {f.fileName} <span className="text-asphalt-600">({fmt.bytes(f.sizeBytes)})</span>
             </span>
           </a>
         </li>

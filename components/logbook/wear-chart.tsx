@@ -8,7 +8,7 @@ import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContai
 import type { TireView } from "@/db/queries/logbook-view";
 import { kmToDistance, mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/logbook";
-import { formatDate } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 
 const LOOK = [
   { stroke: "#1e625c", shape: "circle" },
@@ -33,6 +33,7 @@ function Marker({ cx, cy, stroke, shape }: { cx?: number; cy?: number; stroke: s
 }
 
 export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: TireView[]; limitMm: number; depthUnit: DepthUnit; distanceUnit: DistanceUnit }) {
+  const f = useFormat();
   const [axis, setAxis] = useState<"date" | "odometer">("date");
   const withData = tires.filter((t) => t.series.length > 0);
   if (withData.length === 0) {
@@ -67,8 +68,8 @@ export function WearChart({ tires, limitMm, depthUnit, distanceUnit }: { tires: 
   const unitLabel = depthUnit === "32nds" ? "32nds in" : "mm";
   // Evenly spaced ticks, so labels never pile up where several projections end.
   const ticks = xMax > firstX ? [0, 1, 2, 3, 4].map((i) => Math.round(firstX + ((xMax - firstX) * i) / 4)) : [firstX];
-  const tickFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)).replace(/^\d+ /, "") : `${Math.round(v / 1000)}k ${distanceUnit}`);
-  const xFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
+  const tickFormat = (v: number) => (axis === "date" ? f.monthYear(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
+  const xFormat = (v: number) => (axis === "date" ? f.date(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
 
   return (
     <figure className="space-y-2">

@@ -1,5 +1,6 @@
 "use client";
 // The calendar feed: make a link, copy it, scan it, or turn it off.
+import { useFormat } from "@/components/format/format-provider";
 import { CalendarPlus, Check, Copy, Laptop, Globe, Smartphone } from "lucide-react";
 import { useState, useTransition } from "react";
 import { createFeedLink, turnOffFeed, type NewFeed } from "@/app/(driver)/reminders/actions";
@@ -49,7 +50,8 @@ function CopyField({ label, value, id }: { label: string; value: string; id: str
   );
 }
 
-export function FeedPanel({ feed, timezone }: { feed: FeedState; timezone: string }) {
+export function FeedPanel({ feed }: { feed: FeedState; timezone?: string }) {
+  const f = useFormat();
   const [fresh, setFresh] = useState<NewFeed | null>(null);
   const [state, setState] = useState<FeedState>(feed);
   const [error, setError] = useState<string | null>(null);
@@ -113,9 +115,9 @@ export function FeedPanel({ feed, timezone }: { feed: FeedState; timezone: strin
         </div>
       ) : state ? (
         <p className="text-asphalt-700" data-testid="feed-active">
-          A feed link is active since {new Date(state.createdAt).toLocaleDateString("en-GB", { timeZone: timezone, day: "numeric", month: "short", year: "numeric" })}
+          A feed link is active since {f.dateOf(state.createdAt)}
           {state.lastFetchedAt
-            ? `; a calendar app last read it on ${new Date(state.lastFetchedAt).toLocaleString("en-GB", { timeZone: timezone, day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" })}.`
+            ? `; a calendar app last read it on ${f.dateTime(state.lastFetchedAt)}.`
             : "; no calendar app has read it yet."}{" "}
           Fourpatch keeps only a fingerprint of the link, so it cannot show it again. To subscribe another device, make a new link — the old
           one then stops working, so subscribe your other devices again with the new one.

@@ -1,7 +1,8 @@
 import { CalendarClock, Gauge, Plus, Warehouse } from "lucide-react";
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { formatDate, linkClass, setTitle } from "@/components/logbook/format";
+import { linkClass, setTitle } from "@/components/logbook/format";
+import { viewerFormat } from "@/lib/format/server";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { Card } from "@/components/ui/card";
 import { ConditionBadge } from "@/components/ui/condition-badge";
@@ -9,12 +10,13 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { listVehicleSummaries } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
-import { distanceUnitFor, formatDistance } from "@/lib/units";
+import { distanceUnitFor } from "@/lib/units";
 import { todayIso } from "@/lib/validation/logbook";
 
 export const dynamic = "force-dynamic";
 
 export default async function VehiclesOverviewPage() {
+  const f = await viewerFormat();
   const session = await getSession();
   if (!session) redirect("/sign-in?next=/vehicles");
   const { vehicles, prefs } = await listVehicleSummaries({ userId: session.user.id, today: todayIso() });
@@ -78,7 +80,7 @@ export default async function VehiclesOverviewPage() {
                     <dd>
                       {v.nextReminder ? (
                         <>
-                          Next: <strong>{formatDate(v.nextReminder.date)}</strong> — {v.nextReminder.subject}
+                          Next: <strong>{f.date(v.nextReminder.date)}</strong> — {v.nextReminder.subject}
                           {v.nextReminder.overdue ? <span className="font-semibold text-condition-replace"> (overdue)</span> : null}
                         </>
                       ) : (
@@ -92,8 +94,8 @@ export default async function VehiclesOverviewPage() {
                     <dd>
                       {v.lastCheck ? (
                         <>
-                          Last check {formatDate(v.lastCheck.date)}
-                          {v.lastCheck.odometerKm != null ? ` at ${formatDistance(v.lastCheck.odometerKm, unit)}` : ""}
+                          Last check {f.date(v.lastCheck.date)}
+                          {v.lastCheck.odometerKm != null ? ` at ${f.distance(v.lastCheck.odometerKm, unit)}` : ""}
                         </>
                       ) : (
                         "No tread check yet."

@@ -1,6 +1,6 @@
 import { ChevronRight } from "lucide-react";
+import { viewerFormat } from "@/lib/format/server";
 import Link from "next/link";
-import { formatAt } from "@/components/passes/access-log-table";
 import { PassStateBadge } from "@/components/passes/pass-state-badge";
 import { TimeLeft } from "@/components/passes/time-left";
 import { Card } from "@/components/ui/card";
@@ -15,6 +15,7 @@ import { SCOPE_LABEL } from "@/lib/validation/passes";
 export const dynamic = "force-dynamic";
 
 export default async function ShopHomePage() {
+  const f = await viewerFormat();
   const session = requireSession(await getSession());
   const now = new Date();
   const shops = await membershipsOf({ userId: session.user.id });
@@ -72,7 +73,7 @@ export default async function ShopHomePage() {
                   {p.vehicles.map((v) => v.nickname).join(", ")} · {p.driverName}
                 </span>
                 <span className="flex items-center gap-2 text-sm">
-                  <PassStateBadge state={p.state} /> {formatAt(p.endedAt)}
+                  <PassStateBadge state={p.state} /> {f.dateTime(p.endedAt)}
                 </span>
               </li>
             ))}

@@ -11,7 +11,8 @@ import { getVehicleLogbook, type SetView } from "@/db/queries/logbook";
 import { resolvePassAccess } from "@/db/queries/passes";
 import { getSession } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { depthUnitFor, formatDepth, formatDistance } from "@/lib/units";
+import { depthUnitFor } from "@/lib/units";
+import { viewerFormat } from "@/lib/format/server";
 import { POSITION_LABELS, SERVICE_KIND_LABELS, SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
 
@@ -29,6 +30,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
   const session = await getSession();
   const now = new Date();
   const today = todayIso(now);
+  const f = await viewerFormat();
   let access, logbook;
   try {
     access = await resolvePassAccess({ session, passId, now });
@@ -53,7 +55,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
         <p className="text-lg text-asphalt-700">
           {[v.year, v.make, v.model].filter(Boolean).join(" ")}
           {v.plate ? ` · ${v.plate}` : ""}
-          {logbook.lastOdometer ? ` · ${formatDistance(logbook.lastOdometer.odometerKm, v.odometerUnit)} on ${logbook.lastOdometer.date}` : ""}
+          {logbook.lastOdometer ? ` · ${f.distance(logbook.lastOdometer.odometerKm, v.odometerUnit)} on ${f.date(logbook.lastOdometer.date)}` : ""}
         </p>
       </header>
 
@@ -73,11 +75,11 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
                   <p className="font-mono text-base">{t.dotCode ?? "No DOT code logged"}</p>
                   <p className="text-asphalt-700">
                     {t.dot && t.dot.ok ? `Week ${t.dot.week} of ${t.dot.year}` : t.dot && !t.dot.ok ? t.dot.error : "Date unknown"}
-                    {t.age ? ` · ${t.age.years} y ${t.age.months} m old` : ""}
+                    {t.age ? ` · ${f.age(t.age)}` : ""}
                   </p>
                   <p className="text-2xl font-bold tabular-nums">
-                    {t.depthMm != null ? formatDepth(t.depthMm, depthUnit) : "—"}
-                    <span className="ml-2 text-sm font-normal text-asphalt-600">{t.latest ? `checked ${t.latest.checkedOn}` : "no check yet"}</span>
+                    {t.depthMm != null ? f.depth(t.depthMm, depthUnit) : "—"}
+                    <span className="ml-2 text-sm font-normal text-asphalt-600">{t.latest ? `checked ${f.date(t.latest.checkedOn)}` : "no check yet"}</span>
                   </p>
                   {t.pattern && t.pattern.kind !== "even" ? <p className="text-sm text-asphalt-700">{t.pattern.likelyCause}</p> : null}
                 </Card>
@@ -132,7 +134,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
                 {s.condition ? <ConditionBadge condition={s.condition} /> : null}
               </div>
               <p className="text-sm text-asphalt-700">
-                {s.tires.map((t) => `${POSITION_LABELS[t.position]}: ${t.dotCode ?? "—"}${t.age ? ` (${t.age.years} y ${t.age.months} m)` : ""}`).join(" · ")}
+                {s.tires.map((t) => `${POSITION_LABELS[t.position]}: ${t.dotCode ?? "—"}${t.age ? ` (${f.age(t.age)})` : ""}`).join(" · ")}
               </p>
             </Card>
           ))}
@@ -149,8 +151,8 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
             {logbook.service.map((s) => (
               <li key={s.id} className="px-4 py-3">
                 <p className="font-semibold">
-                  {SERVICE_KIND_LABELS[s.kind]} · {s.performedOn}
-                  {s.odometerKm != null ? ` · ${formatDistance(s.odometerKm, v.odometerUnit)}` : ""}
+                  {SERVICE_KIND_LABELS[s.kind]} · {f.date(s.performedOn)}
+                  {s.odometerKm != null ? ` · ${f.distance(s.odometerKm, v.odometerUnit)}` : ""}
                 </p>
                 <p className="text-sm text-asphalt-600">{s.shopName ? `${s.shopName}${s.authorName ? `, ${s.authorName}` : ""}` : "Logged by the driver"}</p>
                 {s.notes ? <p className="text-sm text-asphalt-700">{s.notes}</p> : null}
@@ -165,7 +167,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
             {logbook.checks.slice(0, 12).map((c) => (
               <li key={c.id} className="px-4 py-3">
                 <p className="font-semibold">
-                  {c.checkedOn} · {c.readings.length} {c.readings.length === 1 ? "tire" : "tires"} · {c.method === "coin" ? "coin (approximate)" : "gauge"}
+                  {f.date(c.checkedOn)} · {f.count(c.readings.length, { one: "tire", other: "tires" })} · {c.method === "coin" ? "coin (approximate)" : "gauge"}
                 </p>
                 <p className="text-sm text-asphalt-600">{c.measuredBy === "shop" ? `${c.shopName ?? "A shop"}${c.authorName ? `, ${c.authorName}` : ""}` : "Measured by the driver"}</p>
               </li>
