@@ -35,6 +35,7 @@ type Values = {
   odometer: string;
   odometerUnit: "km" | "mi";
   confirmLowerOdometer: boolean;
+  confirmUnusualDepth: boolean;
   method: "gauge" | "coin";
   depthUnit: DepthUnit;
   pressureUnit: PressureUnit;
@@ -74,6 +75,7 @@ export function CheckForm({
       odometer: "",
       odometerUnit: vehicle.odometerUnit,
       confirmLowerOdometer: false,
+      confirmUnusualDepth: false,
       method: "gauge",
       depthUnit,
       pressureUnit,
@@ -238,6 +240,12 @@ export function CheckForm({
         {({ id, describedBy }) => <Textarea id={id} aria-describedby={describedBy} {...register("notes")} />}
       </Field>
       <SafetyNote compact />
+      {err("confirmUnusualDepth") || w.confirmUnusualDepth ? (
+        <label className="flex min-h-11 items-center gap-2 rounded border border-condition-watch/40 bg-condition-watch-bg p-2 text-sm">
+          <input type="checkbox" className="size-5" {...register("confirmUnusualDepth")} />
+          The readings marked above are right. Save them anyway.
+        </label>
+      ) : null}
       <div className="sticky bottom-0 -mx-4 border-t border-asphalt-200 bg-white/95 px-4 py-3 backdrop-blur sm:static sm:mx-0 sm:border-0 sm:bg-transparent sm:p-0">
         <Button type="submit" size="lg" className="w-full sm:w-auto" pending={formState.isSubmitting} pendingLabel="Saving the check…">
           Save the check

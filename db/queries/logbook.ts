@@ -22,7 +22,7 @@ import { notFound } from "@/lib/errors";
 import { axlePattern, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
 import { remindersFor } from "./reminders";
 import { assertVehicleAccess } from "./access";
-import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireView } from "./logbook-view";
+import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireCondition, type TireView } from "./logbook-view";
 import type { Condition } from "@/lib/tires";
 
 type Db = Transaction | typeof db;
@@ -64,7 +64,7 @@ export type SetView = {
   ageWatchYears: number | null;
   ageReplaceYears: number | null;
   limit: LimitView;
-  condition: Condition | null;
+  condition: TireCondition | null;
   tires: TireView[];
   axleAdvice: string[];
 };
@@ -291,8 +291,8 @@ export type VehicleSummary = {
   model: string;
   year: number | null;
   odometerUnit: "km" | "mi";
-  mountedSet: { id: string; label: string | null; kind: SetView["kind"]; size: string; condition: Condition | null } | null;
-  storedSets: { id: string; label: string | null; kind: SetView["kind"]; storageLocation: string | null; condition: Condition | null }[];
+  mountedSet: { id: string; label: string | null; kind: SetView["kind"]; size: string; condition: TireCondition | null } | null;
+  storedSets: { id: string; label: string | null; kind: SetView["kind"]; storageLocation: string | null; condition: TireCondition | null }[];
   nextReminder: Pick<ReminderItem, "date" | "subject" | "severity" | "overdue" | "kind"> | null;
   lastCheck: { date: string; odometerKm: number | null } | null;
 };
