@@ -12,7 +12,6 @@ import {
   projectWear,
   tireDepth,
   wearPattern,
-  worseCondition,
   type Condition,
   type Jurisdiction,
   type OdometerEntry,

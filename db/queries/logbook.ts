@@ -23,7 +23,6 @@ import { axlePattern, type Jurisdiction, type OdometerEntry, type ReminderItem }
 import { remindersFor } from "./reminders";
 import { assertVehicleAccess } from "./access";
 import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireCondition, type TireView } from "./logbook-view";
-import type { Condition } from "@/lib/tires";
 
 type Db = Transaction | typeof db;
 
