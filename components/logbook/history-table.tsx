@@ -13,7 +13,8 @@ import {
   type PaginationState,
   type SortingState,
 } from "@tanstack/react-table";
-import { ArrowDown, ArrowUp, ArrowUpDown } from "lucide-react";
+import { ArrowDown, ArrowUp, ArrowUpDown, Trash2 } from "lucide-react";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Input, Select } from "@/components/ui/field";
@@ -76,7 +77,7 @@ export function historyRows(book: VehicleLogbook, depthUnit: DepthUnit, f: Forma
  * the tab spins at full CPU. The React Compiler lint reports the hook as an
  * incompatible library, so nothing here may rely on the compiler memoising.
  */
-export function HistoryTable({ rows, distanceUnit }: { rows: HistoryRow[]; distanceUnit: DistanceUnit }) {
+export function HistoryTable({ rows, distanceUnit, onDelete }: { rows: HistoryRow[]; distanceUnit: DistanceUnit; onDelete?: (row: HistoryRow) => Promise<void> }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: "date", desc: true }]);
   const [typeFilter, setTypeFilter] = useState("");
   const [search, setSearch] = useState("");
@@ -97,8 +98,38 @@ export function HistoryTable({ rows, distanceUnit }: { rows: HistoryRow[]; dista
       },
       { accessorKey: "details", header: "Details", enableSorting: false },
       { accessorKey: "by", header: "By" },
+      ...(onDelete
+        ? [
+            {
+              id: "actions",
+              header: () => <span className="sr-only">Actions</span>,
+              enableSorting: false,
+              cell: (c) => {
+                const row = c.row.original;
+                return (
+                  <ConfirmDialog
+                    trigger={
+                      <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Delete: ${row.type}, ${f.date(row.date)}`}>
+                        <Trash2 aria-hidden className="size-4" />
+                      </button>
+                    }
+                    title={`Delete this ${row.type.toLowerCase()}?`}
+                    description={
+                      <p>
+                        {row.type} of {f.date(row.date)}
+                        {row.details ? ` (${row.details})` : ""} leaves the history, and its readings leave the wear chart. This cannot be undone.
+                      </p>
+                    }
+                    confirmLabel="Delete the entry"
+                    onConfirm={() => onDelete(row)}
+                  />
+                );
+              },
+            } satisfies ColumnDef<HistoryRow>,
+          ]
+        : []),
     ],
-    [distanceUnit, f],
+    [distanceUnit, f, onDelete],
   );
   // eslint-disable-next-line react-hooks/incompatible-library -- the inputs are stable by hand (see above); the compiler is not enabled
   const table = useReactTable({
@@ -182,7 +213,7 @@ export function HistoryTable({ rows, distanceUnit }: { rows: HistoryRow[]; dista
             ))}
             {shown === 0 ? (
               <tr>
-                <td colSpan={6} className="px-3 py-4 text-asphalt-600">
+                <td colSpan={columns.length} className="px-3 py-4 text-asphalt-600">
                   Nothing matches.
                 </td>
               </tr>

@@ -1,6 +1,7 @@
 "use client";
 // One set: each tire's age, depth, wear pattern and projection, the wear
 // chart, the readings table and the set's own limits.
+import type { SetKind } from "@/lib/tires";
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
@@ -89,7 +90,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         <h2 id="tires-h" className="text-xl font-bold">
           Each tire
         </h2>
-        <TireList tires={s.tires} depthUnit={depthUnit} showPattern />
+        <TireList tires={s.tires} depthUnit={depthUnit} showPattern edit={{ vehicleId: d.vehicle.id, setId: s.id, kind: s.kind.replace("_", "-") as SetKind }} />
         {s.tires.some((t) => t.ageReason || t.depthReason) ? (
           <details className="rounded border border-asphalt-200 bg-white p-3 text-sm">
             <summary className="cursor-pointer font-semibold">Why each condition</summary>

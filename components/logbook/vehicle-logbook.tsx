@@ -6,7 +6,9 @@ import { AccessLogTable } from "@/components/passes/access-log-table";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
-import { useMemo, useState } from "react";
+import { useCallback, useMemo, useState } from "react";
+import { toast } from "sonner";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { buttonVariants } from "@/components/ui/button-variants";
@@ -17,11 +19,12 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
 import { depthUnitFor } from "@/lib/units";
+import type { SetKind } from "@/lib/tires";
 import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
-import { HistoryTable, historyRows } from "./history-table";
+import { HistoryTable, historyRows, type HistoryRow } from "./history-table";
 import { ServiceEntryForm } from "./service-entry-form";
 import { TireList } from "./tire-list";
 
@@ -50,6 +53,17 @@ export function VehicleLogbookView({
   const mounted = book.sets.find((s) => s.state === "mounted") ?? null;
   // The table needs the same array until the logbook itself changes (see HistoryTable).
   const rows = useMemo(() => historyRows(book, depthUnit, f), [book, depthUnit, f]);
+  const queryClient = useQueryClient();
+  const deleteEntry = useCallback(
+    async (row: HistoryRow) => {
+      const [kind, ...rest] = row.id.split("-");
+      const entryId = rest.join("-");
+      await api(kind === "c" ? `/api/checks/${entryId}` : `/api/service-entries/${entryId}`, { method: "DELETE" });
+      toast.success(`${row.type} of ${f.date(row.date)} deleted.`);
+      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(id) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
+    },
+    [f, id, queryClient],
+  );
 
   return (
     <>
@@ -65,11 +79,15 @@ export function VehicleLogbookView({
             <Link href={`/log-purchase?vehicle=${id}`} className={buttonVariants({ variant: "secondary" })}>
               Log a purchase
             </Link>
+            <Link href={`/vehicles/${id}/edit`} className={buttonVariants({ variant: "ghost" })}>
+              Change or delete the vehicle
+            </Link>
           </>
           ) : null
         }
       />
       {saved === "set" ? <Alert tone="success" className="mb-4">The new set is saved in the logbook.</Alert> : null}
+      {saved === "vehicle" ? <Alert tone="success" className="mb-4">The vehicle is saved.</Alert> : null}
       {saved === "check" ? <Alert tone="success" className="mb-4">The tread check is saved.</Alert> : null}
 
       <section aria-labelledby="sets-h" className="mb-8 space-y-4">
@@ -94,14 +112,14 @@ export function VehicleLogbookView({
         {canManage ? (
           <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
         ) : null}
-        <HistoryTable rows={rows} distanceUnit={distanceUnit} />
+        <HistoryTable rows={rows} distanceUnit={distanceUnit} onDelete={canManage ? deleteEntry : undefined} />
       </section>
 
       <section aria-labelledby="files-h" className="mb-8 space-y-3">
         <h2 id="files-h" className="text-xl font-bold">
           Receipts and photos
         </h2>
-        {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} />}
+        {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} deletable={canManage ? id : undefined} />}
       </section>
 
       {canManage ? (
@@ -160,7 +178,7 @@ function SetCard({
         </div>
         {set.condition ? <ConditionBadge condition={set.condition} detail="set" /> : null}
       </div>
-      <TireList tires={set.tires} depthUnit={depthUnit} />
+      <TireList tires={set.tires} depthUnit={depthUnit} edit={canManage ? { vehicleId, setId: set.id, kind: set.kind.replace("_", "-") as SetKind } : undefined} />
       {set.axleAdvice.length ? (
         <ul className="list-disc pl-5 text-sm text-asphalt-700">
           {set.axleAdvice.map((a) => (
@@ -237,18 +255,37 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
   );
 }
 
-function FileList({ files }: { files: VehicleLogbook["attachments"] }) {
+/** `deletable` (the vehicle's id) adds a delete button with a confirmation to each file. */
+function FileList({ files, deletable }: { files: VehicleLogbook["attachments"]; deletable?: string }) {
   const fmt = useFormat();
+  const queryClient = useQueryClient();
   return (
     <ul className="flex flex-wrap gap-2" aria-label="Files">
       {files.map((f) => (
-        <li key={f.id}>
+        <li key={f.id} className="flex items-center">
           <a href={`/api/attachments/${f.id}`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center gap-2 rounded border border-asphalt-200 bg-white px-3 text-sm">
             {f.mimeType.startsWith("image/") ? <ImageIcon aria-hidden className="size-4" /> : <FileText aria-hidden className="size-4" />}
             <span>
               {f.kind === "receipt" ? "Receipt" : f.kind === "photo" ? "Photo" : "Document"}: {f.fileName} <span className="text-asphalt-600">({fmt.bytes(f.sizeBytes)})</span>
             </span>
           </a>
+          {deletable ? (
+            <ConfirmDialog
+              trigger={
+                <Button type="button" size="sm" variant="ghost" className="ml-1">
+                  Delete<span className="sr-only"> {f.fileName}</span>
+                </Button>
+              }
+              title={`Delete ${f.fileName}?`}
+              description={<p>The file leaves the logbook for good. The set and its history stay.</p>}
+              confirmLabel="Delete the file"
+              onConfirm={async () => {
+                await api(`/api/attachments/${f.id}`, { method: "DELETE" });
+                toast.success(`${f.fileName} deleted.`);
+                await queryClient.invalidateQueries({ queryKey: keys.vehicle(deletable) });
+              }}
+            />
+          ) : null}
         </li>
       ))}
     </ul>
