@@ -222,6 +222,12 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
   const onSubmit = form.handleSubmit(
     async (parsed) => {
       setFormError(null);
+      // Which set comes off, and what becomes of it, is known here already: asked before any request.
+      if (replacing && !parsed.replacedFate) {
+        form.setError("replacedFate", { message: "Choose whether the set coming off is stored or retired." });
+        setFormError("Some fields need attention: they are marked below.");
+        return;
+      }
       const withoutCode = parsed.tires.filter((t) => !t.dotCode).length;
       if (withoutCode > 0 && !codesAccepted.current && !savedSetId) {
         setMissingCodes("asking");

@@ -206,6 +206,7 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
   const [date, setDate] = useState(todayIso());
   const [odometer, setOdometer] = useState("");
   const [confirmLower, setConfirmLower] = useState(false);
+  const [storageError, setStorageError] = useState<string | null>(null);
   const swap = useMutation({
     mutationFn: () => api(`/api/vehicles/${vehicleId}/swap`, { body: { setId: set.id, storageLocation: storage, date, odometer, confirmLowerOdometer: confirmLower } }),
     onSuccess: async () => {
@@ -229,13 +230,19 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
       className="w-full space-y-3 rounded border border-groove-200 bg-groove-50 p-3"
       onSubmit={(e) => {
         e.preventDefault();
+        // The set coming off needs a place: said here, before the server is asked.
+        if (!storage.trim()) {
+          setStorageError(mounted ? `Say where ${setTitle(mounted)} will be kept.` : "Say where the set coming off is kept.");
+          return;
+        }
+        setStorageError(null);
         swap.mutate();
       }}
     >
       <p className="font-semibold">Seasonal swap: {setTitle(set)} goes on the car{mounted ? `, ${setTitle(mounted)} comes off` : ""}.</p>
       {err ? <Alert tone="error">{err.message}</Alert> : null}
       <div className="grid gap-3 sm:grid-cols-3">
-        <Field label={mounted ? `Where ${setTitle(mounted)} will be kept` : "Where the set coming off is kept"} error={err?.fields.storageLocation}>
+        <Field label={mounted ? `Where ${setTitle(mounted)} will be kept` : "Where the set coming off is kept"} error={storageError ?? err?.fields.storageLocation}>
           {({ id, describedBy, invalid }) => <Input id={id} aria-describedby={describedBy} aria-invalid={invalid} value={storage} onChange={(e) => setStorage(e.target.value)} />}
         </Field>
         <Field label="Date" error={err?.fields.date}>

@@ -1,5 +1,6 @@
 "use client";
 // The calendar feed: make a link, copy it, scan it, or turn it off.
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useFormat } from "@/components/format/format-provider";
 import { CalendarPlus, Check, Copy, Laptop, Globe, Smartphone } from "lucide-react";
 import { useState, useTransition } from "react";
@@ -130,9 +131,31 @@ export function FeedPanel({ feed }: { feed: FeedState; timezone?: string }) {
       )}
 
       <div className="flex flex-wrap gap-2">
-        <Button type="button" variant={state ? "secondary" : "primary"} onClick={makeLink} pending={pending && working === "new"} pendingLabel="Making a link…">
-          {fresh ? "Make another link (this one stops)" : state ? "Make a new feed link" : "Make my calendar link"}
-        </Button>
+        {state ? (
+          // A new link ends the old one: every calendar subscribed to it stops getting dates. Said first.
+          <ConfirmDialog
+            tone="primary"
+            trigger={
+              <Button type="button" variant="secondary" pending={pending && working === "new"} pendingLabel="Making a link…">
+                {fresh ? "Make another link (this one stops)" : "Make a new feed link"}
+              </Button>
+            }
+            title="Make a new feed link?"
+            description={
+              <p>
+                The current link stops working at once. Every calendar subscribed to it stops getting tire dates, and its dates disappear; you will
+                need to subscribe each device again with the new link.
+              </p>
+            }
+            confirmLabel="Make a new link"
+            cancelLabel="Keep the current link"
+            onConfirm={makeLink}
+          />
+        ) : (
+          <Button type="button" variant="primary" onClick={makeLink} pending={pending && working === "new"} pendingLabel="Making a link…">
+            Make my calendar link
+          </Button>
+        )}
         {state && !confirmOff ? (
           <Button type="button" variant="secondary" onClick={() => setConfirmOff(true)} disabled={pending}>
             Turn the feed off

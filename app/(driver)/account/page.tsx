@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { AccountData } from "@/components/account/account-data";
 import { UnitsForm } from "@/components/logbook/units-form";
@@ -6,6 +7,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { driverPrefs } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
 import { saveUnits } from "./actions";
+
+export const metadata: Metadata = { title: "Account" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { viewerFormat } from "@/lib/format/server";
 import { AccessLogTable } from "@/components/passes/access-log-table";
@@ -14,6 +15,8 @@ import { requireSession } from "@/lib/auth/roles";
 import { getSession } from "@/lib/auth/session";
 import { cn } from "@/lib/cn";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
+
+export const metadata: Metadata = { title: "Shop passes" };
 
 export const dynamic = "force-dynamic";
 

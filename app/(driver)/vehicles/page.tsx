@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { CalendarClock, Gauge, Plus, Warehouse } from "lucide-react";
 import Link from "next/link";
 import { redirect } from "next/navigation";
@@ -12,6 +13,8 @@ import { listVehicleSummaries } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
 import { distanceUnitFor } from "@/lib/units";
 import { todayIso } from "@/lib/validation/logbook";
+
+export const metadata: Metadata = { title: "Vehicles" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { ChevronRight } from "lucide-react";
 import { viewerFormat } from "@/lib/format/server";
 import Link from "next/link";
@@ -11,6 +12,8 @@ import { getSession } from "@/lib/auth/session";
 import { cn } from "@/lib/cn";
 import { SERVICE_KIND_LABELS } from "@/lib/validation/logbook";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
+
+export const metadata: Metadata = { title: "Passes at the shop" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { Paperclip } from "lucide-react";
 import { notFound } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
@@ -15,6 +16,8 @@ import { depthUnitFor } from "@/lib/units";
 import { viewerFormat } from "@/lib/format/server";
 import { POSITION_LABELS, SERVICE_KIND_LABELS, SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
+
+export const metadata: Metadata = { title: "Logbook under a pass" };
 
 export const dynamic = "force-dynamic";
 
