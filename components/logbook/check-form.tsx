@@ -128,8 +128,8 @@ export function CheckForm({
       {error ? <Alert tone="error">{error}</Alert> : null}
       <Card className="space-y-3">
         <CardTitle>When and which set</CardTitle>
-        <div className="grid gap-3 sm:grid-cols-3">
-          <Field label="Set" error={err("setId")}>
+        <div className="grid gap-3 sm:grid-cols-2">
+          <Field label="Set" className="sm:col-span-2" error={err("setId")}>
             {({ id, describedBy, invalid }) => (
               <Select
                 id={id}

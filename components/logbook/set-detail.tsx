@@ -112,16 +112,16 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         {d.checks.length === 0 ? (
           <p className="text-asphalt-600">No checks yet.</p>
         ) : (
-          <div className="overflow-x-auto rounded border border-asphalt-200">
-            <table className="w-full min-w-[36rem] text-left text-sm" data-testid="readings-table">
+          <div className="rounded border border-asphalt-200">
+            <table className="w-full text-left text-sm" data-testid="readings-table">
               <thead className="bg-asphalt-100">
                 <tr>
                   <th scope="col" className="px-3 py-2">Date</th>
-                  <th scope="col" className="px-3 py-2">Odometer</th>
+                  <th scope="col" className="hidden px-3 py-2 md:table-cell">Odometer</th>
                   <th scope="col" className="px-3 py-2">Tire</th>
                   <th scope="col" className="px-3 py-2">Inner · centre · outer</th>
-                  <th scope="col" className="px-3 py-2">Pressure</th>
-                  <th scope="col" className="px-3 py-2">By</th>
+                  <th scope="col" className="hidden px-3 py-2 md:table-cell">Pressure</th>
+                  <th scope="col" className="hidden px-3 py-2 md:table-cell">By</th>
                 </tr>
               </thead>
               <tbody>
@@ -129,15 +129,18 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
                   c.readings.map((r) => (
                     <tr key={`${c.id}-${r.tireId}`} className="border-t border-asphalt-200">
                       <td className="px-3 py-2 whitespace-nowrap">{f.date(c.checkedOn)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{f.distance(c.odometerKm, distanceUnit)}</td>
+                      <td className="hidden px-3 py-2 whitespace-nowrap md:table-cell">{f.distance(c.odometerKm, distanceUnit)}</td>
                       <td className="px-3 py-2">{positionOf.get(r.tireId) ?? "—"}</td>
                       <td className="px-3 py-2">
                         {r.approximate
                           ? `about ${f.depth(r.centreMm, depthUnit)} (coin)`
                           : [r.innerMm, r.centreMm, r.outerMm].map((x) => f.depth(x, depthUnit)).join(" · ")}
+                        <span className="mt-1 block text-asphalt-600 md:hidden">
+                          {[f.distance(c.odometerKm, distanceUnit), r.pressureKpa != null ? f.pressure(r.pressureKpa, d.viewer.pressureUnit) : null, c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"].filter(Boolean).join(" · ")}
+                        </span>
                       </td>
-                      <td className="px-3 py-2">{f.pressure(r.pressureKpa, d.viewer.pressureUnit)}</td>
-                      <td className="px-3 py-2">{c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"}</td>
+                      <td className="hidden px-3 py-2 md:table-cell">{f.pressure(r.pressureKpa, d.viewer.pressureUnit)}</td>
+                      <td className="hidden px-3 py-2 md:table-cell">{c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"}</td>
                     </tr>
                   )),
                 )}
@@ -147,7 +150,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         )}
         {d.checks.length > 3 ? (
           <Button type="button" variant="secondary" size="sm" onClick={() => setShowAll((x) => !x)} aria-expanded={showAll}>
-            {showAll ? "Show the latest three checks" : `Show all ${d.checks.length} checks`}
+            {showAll ? "Show the latest three checks" : `Show all ${f.count(d.checks.length, { one: "check", other: "checks" })}`}
           </Button>
         ) : null}
       </section>

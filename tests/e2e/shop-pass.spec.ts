@@ -133,10 +133,17 @@ test("the owner invites a technician, who joins once through the e-mailed link, 
   await session.signInAndLand(demoAccounts.wren.email, "/shop");
   await page.goto("/shop/profile");
   await page.getByRole("button", { name: "Remove Perrin" }).click();
+  // Removing someone asks first; keeping them changes nothing.
+  await page.getByRole("alertdialog").getByRole("button", { name: "Keep it" }).click();
+  await expect(page.getByText("Perrin Dunmore is no longer on the staff.")).toHaveCount(0);
+  await page.getByRole("button", { name: "Remove Perrin" }).click();
+  await expect(page.getByRole("alertdialog")).toContainText("can no longer open the shop's passes");
+  await page.getByRole("alertdialog").getByRole("button", { name: "Remove Perrin" }).click();
   await expect(page.getByText("Perrin Dunmore is no longer on the staff.")).toBeVisible();
   await session.signOut();
   // No shop any more: the account lands on its own vehicles page, and the workspace is closed to it.
   await session.signInAndLand(email, "/vehicles", "a-long-enough-password");
   await page.goto("/shop");
-  await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "You are no longer on the staff" })).toBeVisible();
+  await expect(page.getByText("Quillby Tread Works removed this account from its staff")).toBeVisible();
 });
