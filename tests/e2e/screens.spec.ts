@@ -8,6 +8,7 @@ import { demoAccounts } from "../../db/seed/demo-accounts";
 import { addDays, dotWeekOf, formatDotDateCode } from "../../lib/tires";
 import { HistoryPages } from "./pages/history";
 import { LogbookPages, POSITIONS } from "./pages/logbook";
+import { PLUS_ADDS } from "../../lib/plan";
 import { SessionPages } from "./pages/session";
 import { DriverPassesPage, ShopWorkspacePage } from "./pages/shop-pass";
 
@@ -181,4 +182,29 @@ test("on a phone the technician sees the saved confirmation where they are looki
   await tech.screenshot({ path: `${SCREENS}/technician-confirmation-phone.png` });
   await techCtx.close();
   await driverCtx.close();
+});
+
+test("pricing promises only what the plan changes, and a 404 has a way back", async ({ page }) => {
+  await page.goto("/pricing");
+  await expect(page.getByText(/more vehicles/i)).toHaveCount(0);
+  for (const line of PLUS_ADDS) await expect(page.getByText(line)).toBeVisible();
+  const res = await page.goto("/vehicles/00000000-0000-4000-8000-000000000000/nowhere");
+  expect(res?.status()).toBe(404);
+  await expect(page.getByRole("heading", { name: "This page is not here" })).toBeVisible();
+  await expect(page).toHaveTitle("Page not found · Fourpatch");
+  await page.getByRole("link", { name: "Fourpatch home" }).click();
+  await expect(page).toHaveURL(/\/$/);
+});
+
+test("the seasonal swap asks where the set coming off goes before any request", async ({ page }) => {
+  await openAdasCar(page);
+  const requests: string[] = [];
+  page.on("request", (r) => r.url().includes("/swap") && requests.push(r.url()));
+  const card = new LogbookPages(page).setCard(/Winter/);
+  await card.getByRole("button", { name: "Put this set on the car" }).click();
+  await card.getByLabel(/will be kept|set coming off is kept/).fill("");
+  await card.getByRole("button", { name: "Save the swap" }).click();
+  await expect(card.getByText(/Say where .* will be kept\./)).toBeVisible();
+  expect(requests).toEqual([]);
+  await card.getByRole("button", { name: "Cancel" }).click();
 });

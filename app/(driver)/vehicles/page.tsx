@@ -65,43 +65,44 @@ export default async function VehiclesOverviewPage() {
                 </div>
                 <dl className="space-y-2 text-sm">
                   <div className="flex gap-2">
-                    <dt className="sr-only">On the car</dt>
                     <Gauge aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    {/* The term is shown once, visibly: no second, hidden copy for screen readers. */}
+                    <dt className="shrink-0 text-asphalt-600">On the car:</dt>
                     <dd>
                       {v.mountedSet ? (
                         <>
-                          On the car: <Link href={`/sets/${v.mountedSet.id}`} className={linkClass}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
+                          <Link href={`/sets/${v.mountedSet.id}`} className={linkClass}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
                         </>
                       ) : (
-                        <>No set on the car in the logbook.</>
+                        <>no set in the logbook.</>
                       )}
                     </dd>
                   </div>
                   <div className="flex gap-2">
-                    <dt className="sr-only">Next reminder</dt>
                     <CalendarClock aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    <dt className="shrink-0 text-asphalt-600">Next:</dt>
                     <dd>
                       {v.nextReminder ? (
                         <>
-                          Next: <strong>{f.date(v.nextReminder.date)}</strong> — {v.nextReminder.subject}
+                          <strong>{f.date(v.nextReminder.date)}</strong> — {v.nextReminder.subject}
                           {v.nextReminder.overdue ? <span className="font-semibold text-condition-replace"> (overdue)</span> : null}
                         </>
                       ) : (
-                        "No reminder yet: log the tires' DOT codes and a tread check."
+                        "no reminder yet: log the tires' DOT codes and a tread check."
                       )}
                     </dd>
                   </div>
                   <div className="flex gap-2">
-                    <dt className="sr-only">Last tread check</dt>
                     <Gauge aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    <dt className="shrink-0 text-asphalt-600">Last check:</dt>
                     <dd>
                       {v.lastCheck ? (
                         <>
-                          Last check {f.date(v.lastCheck.date)}
+                          {f.date(v.lastCheck.date)}
                           {v.lastCheck.odometerKm != null ? ` at ${f.distance(v.lastCheck.odometerKm, unit)}` : ""}
                         </>
                       ) : (
-                        "No tread check yet."
+                        "none yet."
                       )}
                     </dd>
                   </div>
