@@ -142,6 +142,8 @@ export function HistoryTable({ rows, distanceUnit, onDelete }: { rows: HistoryRo
     },
     onPaginationChange: setPagination,
     autoResetPageIndex: false,
+    // A header click goes between ascending and descending; the history never sits unsorted.
+    enableSortingRemoval: false,
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),
