@@ -208,3 +208,19 @@ test("the seasonal swap asks where the set coming off goes before any request", 
   expect(requests).toEqual([]);
   await card.getByRole("button", { name: "Cancel" }).click();
 });
+
+test("times are shown in the viewer's own zone and locale (a browser in Berlin, in German)", async ({ browser }) => {
+  const ctx = await browser.newContext({ timezoneId: "Europe/Berlin", locale: "de-DE", viewport: DESKTOP });
+  const page = await ctx.newPage();
+  await openAdasCar(page);
+  // The browser tells the server its zone once (a cookie), and the page is drawn again in it.
+  await expect.poll(async () => (await ctx.cookies()).find((c) => c.name === "fp_tz")?.value).toBe("Europe%2FBerlin");
+  const log = page.getByRole("region", { name: "Who looked at this logbook" });
+  // December in Berlin is CET: "MEZ" in German (EU summer time ends on the last Sunday of October, Directive 2000/84/EC).
+  await expect(log.getByRole("cell").first()).toContainText(/MEZ|MESZ/);
+  await expect(log).not.toContainText("UTC");
+  // German grouping in numbers ("73.740 km"), German month names in dates; no ISO dates.
+  await expect(page.getByRole("heading", { level: 1 }).locator("xpath=..")).toContainText(/\d{1,3}\.\d{3} km/);
+  await expect(page.locator("main")).not.toContainText(/\b20\d\d-\d\d-\d\d\b/);
+  await ctx.close();
+});
