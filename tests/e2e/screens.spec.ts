@@ -224,3 +224,13 @@ test("times are shown in the viewer's own zone and locale (a browser in Berlin, 
   await expect(page.locator("main")).not.toContainText(/\b20\d\d-\d\d-\d\d\b/);
   await ctx.close();
 });
+
+test("an expired password-reset link offers a new one; a deleted account is told so", async ({ page }) => {
+  await page.goto("/reset-password?token=used-token&error=INVALID_TOKEN");
+  await expect(page.getByText("This reset link has expired or was already used.")).toBeVisible();
+  await page.getByRole("link", { name: "Send me a new link" }).click();
+  await expect(page).toHaveURL(/\/forgot-password$/);
+  await expect(page.getByRole("button", { name: "Send me a reset link" })).toBeVisible();
+  await page.goto("/?account=deleted");
+  await expect(page.getByRole("status").filter({ hasText: "Your account is deleted" })).toBeVisible();
+});
