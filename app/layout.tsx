@@ -3,6 +3,8 @@ import localFont from "next/font/local";
 import { connection } from "next/server";
 import type { ReactNode } from "react";
 import { Toaster } from "sonner";
+import { FormatProvider } from "@/components/format/format-provider";
+import { viewerPrefs } from "@/lib/format/server";
 import "./globals.css";
 
 const sans = localFont({
@@ -29,10 +31,11 @@ export const viewport: Viewport = { width: "device-width", initialScale: 1, them
 // Every page is rendered per request, so each gets the nonce of its own CSP (proxy.ts).
 export default async function RootLayout({ children }: { children: ReactNode }) {
   await connection();
+  const prefs = await viewerPrefs();
   return (
     <html lang="en" className={`${sans.variable} ${mono.variable}`}>
       <body className="min-h-dvh font-sans">
-        {children}
+        <FormatProvider prefs={prefs}>{children}</FormatProvider>
         <Toaster position="top-center" richColors closeButton />
       </body>
     </html>

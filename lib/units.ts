@@ -39,26 +39,6 @@ export function kpaToPressure(kpa: number, unit: PressureUnit): number {
   return kpa;
 }
 
-const round = (n: number, digits: number) => {
-  const f = 10 ** digits;
-  return Math.round(n * f) / f;
-};
-
-export function formatDepth(mm: number | null | undefined, unit: DepthUnit): string {
-  if (mm == null || !Number.isFinite(mm)) return "—";
-  return unit === "32nds" ? `${round(mmToThirtySeconds(mm), 1)}/32 in` : `${round(mm, 1)} mm`;
-}
-export function formatDistance(km: number | null | undefined, unit: DistanceUnit): string {
-  if (km == null || !Number.isFinite(km)) return "—";
-  // Grouped with a thin space so the result is the same whatever the server's locale.
-  const n = String(Math.round(kmToDistance(km, unit))).replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f");
-  return `${n} ${unit}`;
-}
-export function formatPressure(kpa: number | null | undefined, unit: PressureUnit): string {
-  if (kpa == null || !Number.isFinite(kpa)) return "—";
-  if (unit === "bar") return `${round(kpa / KPA_PER_BAR, 2)} bar`;
-  if (unit === "psi") return `${round(kpa / KPA_PER_PSI, 1)} psi`;
-  return `${Math.round(kpa)} kPa`;
-}
+// Text for these values comes from lib/format (Intl, the viewer's locale).
 export const depthUnitLabel = (u: DepthUnit) => (u === "32nds" ? "32nds of an inch" : "mm");
 export const pressureUnitLabel = (u: PressureUnit) => ({ kpa: "kPa", psi: "psi", bar: "bar" })[u];

@@ -1,4 +1,5 @@
 import { CalendarDays, Gauge, KeyRound, ScanLine } from "lucide-react";
+import { Alert } from "@/components/ui/alert";
 import Link from "next/link";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { ConditionBadge } from "@/components/ui/condition-badge";
@@ -27,9 +28,17 @@ const features = [
   },
 ];
 
-export default function LandingPage() {
+export default async function LandingPage({ searchParams }: { searchParams: Promise<{ account?: string }> }) {
+  const { account } = await searchParams;
   return (
     <>
+      {account === "deleted" ? (
+        <div className="mx-auto max-w-6xl px-4 pt-6">
+          <Alert tone="success" title="Your account is deleted">
+            Your vehicles, tires, checks, files and passes are gone, and you are signed out. Thank you for keeping your tires in Fourpatch.
+          </Alert>
+        </div>
+      ) : null}
       <section className="bg-gradient-to-b from-groove-50 to-asphalt-50">
         <div className="mx-auto grid max-w-6xl gap-10 px-4 py-12 sm:py-20 lg:grid-cols-2 lg:items-center">
           <div>

@@ -13,10 +13,11 @@ import { Card, CardTitle } from "@/components/ui/card";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { COIN_RESULTS, coinLabel, type CoinResult } from "@/lib/tires";
-import { distanceToKm, formatDistance, type DepthUnit, type PressureUnit } from "@/lib/units";
+import { distanceToKm, type DepthUnit, type PressureUnit } from "@/lib/units";
 import { POSITION_LABELS, todayIso, treadCheckSchema, type PositionValue } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
 import { setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 
 export type CheckSetChoice = {
   id: string;
@@ -34,6 +35,7 @@ type Values = {
   odometer: string;
   odometerUnit: "km" | "mi";
   confirmLowerOdometer: boolean;
+  confirmUnusualDepth: boolean;
   method: "gauge" | "coin";
   depthUnit: DepthUnit;
   pressureUnit: PressureUnit;
@@ -59,6 +61,7 @@ export function CheckForm({
   pressureUnit: PressureUnit;
   preselect?: string;
 }) {
+  const f = useFormat();
   const router = useRouter();
   const queryClient = useQueryClient();
   const [error, setError] = useState<string | null>(null);
@@ -72,6 +75,7 @@ export function CheckForm({
       odometer: "",
       odometerUnit: vehicle.odometerUnit,
       confirmLowerOdometer: false,
+      confirmUnusualDepth: false,
       method: "gauge",
       depthUnit,
       pressureUnit,
@@ -124,8 +128,8 @@ export function CheckForm({
       {error ? <Alert tone="error">{error}</Alert> : null}
       <Card className="space-y-3">
         <CardTitle>When and which set</CardTitle>
-        <div className="grid gap-3 sm:grid-cols-3">
-          <Field label="Set" error={err("setId")}>
+        <div className="grid gap-3 sm:grid-cols-2">
+          <Field label="Set" className="sm:col-span-2" error={err("setId")}>
             {({ id, describedBy, invalid }) => (
               <Select
                 id={id}
@@ -146,7 +150,7 @@ export function CheckForm({
           </Field>
           <Field
             label={`Odometer (${vehicle.odometerUnit})`}
-            hint={lastOdometer ? `Last: ${formatDistance(lastOdometer.odometerKm, vehicle.odometerUnit)}` : undefined}
+            hint={lastOdometer ? `Last: ${f.distance(lastOdometer.odometerKm, vehicle.odometerUnit)}` : undefined}
             error={err("odometer")}
           >
             {({ id, describedBy, invalid }) => <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} {...register("odometer")} />}
@@ -236,6 +240,12 @@ export function CheckForm({
         {({ id, describedBy }) => <Textarea id={id} aria-describedby={describedBy} {...register("notes")} />}
       </Field>
       <SafetyNote compact />
+      {err("confirmUnusualDepth") || w.confirmUnusualDepth ? (
+        <label className="flex min-h-11 items-center gap-2 rounded border border-condition-watch/40 bg-condition-watch-bg p-2 text-sm">
+          <input type="checkbox" className="size-5" {...register("confirmUnusualDepth")} />
+          The readings marked above are right. Save them anyway.
+        </label>
+      ) : null}
       <div className="sticky bottom-0 -mx-4 border-t border-asphalt-200 bg-white/95 px-4 py-3 backdrop-blur sm:static sm:mx-0 sm:border-0 sm:bg-transparent sm:p-0">
         <Button type="submit" size="lg" className="w-full sm:w-auto" pending={formState.isSubmitting} pendingLabel="Saving the check…">
           Save the check

@@ -5,9 +5,10 @@ import { AlertTriangle, CheckCircle2, XCircle } from "lucide-react";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { ageCondition, checkFit, decodeDotCode, loadIndexKg, overallDiameter, parseTireSize, speedSymbolKmh, type FitStatus, type SetKind } from "@/lib/tires";
 import { todayIso } from "@/lib/validation/logbook";
-import { formatAge, formatDate } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 
 export function DotPreview({ code, kind, id }: { code: string | undefined; kind: SetKind; id?: string }) {
+  const f = useFormat();
   if (!code || !code.trim()) return <p id={id} className="text-xs text-asphalt-600">The last four digits of the DOT code give the week and year of manufacture.</p>;
   const today = todayIso();
   const d = decodeDotCode(code, { today });
@@ -22,11 +23,11 @@ export function DotPreview({ code, kind, id }: { code: string | undefined; kind:
   return (
     <div id={id} className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-asphalt-800" data-testid="dot-decoded">
       <span>
-        Made in week {d.week} of {d.year} ({formatDate(d.weekStart)} – {formatDate(d.weekEnd)})
+        Made in week {d.week} of {d.year} ({f.date(d.weekStart)} – {f.date(d.weekEnd)})
       </span>
       {age.ok ? (
         <>
-          <span className="font-semibold">{formatAge(age.age)}</span>
+          <span className="font-semibold">{f.age(age.age)}</span>
           <ConditionBadge condition={age.level} detail="by age" />
         </>
       ) : null}

@@ -7,7 +7,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { Paperclip, Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useRef, useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -28,7 +28,8 @@ import {
   type PositionValue,
 } from "@/lib/validation/logbook";
 import { api, ApiError, keys, uploadFile } from "./api";
-import { formatBytes, setTitle } from "./format";
+import { setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 import { DotPreview, SizePreview } from "./live-decode";
 
 export type VehicleChoice = {
@@ -76,6 +77,7 @@ const coreKind = (k: Values["kind"]) => k.replace("_", "-") as SetKind;
 type Upload = { file: File; kind: "receipt" | "photo"; progress: number; error?: string; done?: boolean };
 
 export function PurchaseForm({ vehicles, units, preselect }: { vehicles: VehicleChoice[]; units: UnitSystem; preselect?: string }) {
+  const f = useFormat();
   const router = useRouter();
   const queryClient = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
@@ -84,6 +86,9 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
   // A vehicle created inline is kept, so a retry after a failed save does not add it twice.
   const [createdVehicle, setCreatedVehicle] = useState<VehicleChoice | null>(null);
   const [savedSetId, setSavedSetId] = useState<string | null>(null);
+  // Tires saved without a DOT code have no known age: the driver is told before saving, once.
+  const [missingCodes, setMissingCodes] = useState<"unasked" | "asking" | "accepted">("unasked");
+  const codesAccepted = useRef(false);
 
   const allVehicles = createdVehicle ? [...vehicles, createdVehicle] : vehicles;
   const initialVehicle = preselect && vehicles.some((v) => v.id === preselect) ? preselect : (vehicles[0]?.id ?? NEW);
@@ -217,6 +222,18 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
   const onSubmit = form.handleSubmit(
     async (parsed) => {
       setFormError(null);
+      // Which set comes off, and what becomes of it, is known here already: asked before any request.
+      if (replacing && !parsed.replacedFate) {
+        form.setError("replacedFate", { message: "Choose whether the set coming off is stored or retired." });
+        setFormError("Some fields need attention: they are marked below.");
+        return;
+      }
+      const withoutCode = parsed.tires.filter((t) => !t.dotCode).length;
+      if (withoutCode > 0 && !codesAccepted.current && !savedSetId) {
+        setMissingCodes("asking");
+        requestAnimationFrame(() => document.getElementById("missing-codes")?.focus());
+        return;
+      }
       setPhase("saving");
       try {
         const vid = await ensureVehicle();
@@ -460,7 +477,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
               <li key={`${u.file.name}-${i}`} className="rounded border border-asphalt-200 p-2 text-sm">
                 <div className="flex items-center justify-between gap-2">
                   <span className="min-w-0 truncate">
-                    {u.kind === "receipt" ? "Receipt" : "Photo"}: {u.file.name} ({formatBytes(u.file.size)})
+                    {u.kind === "receipt" ? "Receipt" : "Photo"}: {u.file.name} ({f.bytes(u.file.size)})
                   </span>
                   {!u.done ? (
                     <button type="button" className="inline-flex min-h-11 min-w-11 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Remove ${u.file.name}`} onClick={() => setUploads((all) => all.filter((_, j) => j !== i))}>
@@ -481,6 +498,42 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
       </Card>
 
       <SafetyNote compact />
+      {missingCodes === "asking" ? (
+        <div id="missing-codes" tabIndex={-1} role="alert" className="space-y-3 rounded border border-condition-watch/40 bg-condition-watch-bg p-3 text-asphalt-900 outline-none focus-visible:ring-2 focus-visible:ring-groove-700">
+          <p className="font-semibold">
+            {f.count(tires.filter((t) => !t.dotCode?.trim()).length, { one: "tire has", other: "tires have" })} no DOT code.
+          </p>
+          <p className="text-sm">
+            Without the code Fourpatch cannot tell how old a tire is, so it shows &ldquo;Age unknown — read the code&rdquo; instead of a condition, and no
+            age reminders. You can add each code later from the vehicle page.
+          </p>
+          <div className="flex flex-wrap gap-2">
+            <Button
+              type="button"
+              size="sm"
+              variant="secondary"
+              onClick={() => {
+                setMissingCodes("unasked");
+                const i = tires.findIndex((t) => !t.dotCode?.trim());
+                form.setFocus(`tires.${Math.max(0, i)}.dotCode`);
+              }}
+            >
+              Add the codes now
+            </Button>
+            <Button
+              type="button"
+              size="sm"
+              onClick={() => {
+                codesAccepted.current = true;
+                setMissingCodes("accepted");
+                void onSubmit();
+              }}
+            >
+              Save without the codes
+            </Button>
+          </div>
+        </div>
+      ) : null}
       <div className="sticky bottom-0 -mx-4 border-t border-asphalt-200 bg-white/95 px-4 py-3 backdrop-blur sm:static sm:mx-0 sm:border-0 sm:bg-transparent sm:p-0">
         <Button type="submit" size="lg" className="w-full sm:w-auto" pending={busy} pendingLabel={phase === "uploading" ? "Uploading files…" : "Saving the purchase…"}>
           {savedSetId ? "Retry the uploads" : "Save the purchase"}

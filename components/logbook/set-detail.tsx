@@ -2,6 +2,7 @@
 // One set: each tire's age, depth, wear pattern and projection, the wear
 // chart, the readings table and the set's own limits.
 import dynamic from "next/dynamic";
+import type { SetKind } from "@/lib/tires";
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
@@ -13,10 +14,11 @@ import { ConditionBadge } from "@/components/ui/condition-badge";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetDetail } from "@/db/queries/logbook";
-import { depthUnitFor, formatDepth, formatDistance, formatPressure } from "@/lib/units";
+import { depthUnitFor, } from "@/lib/units";
 import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/logbook";
 import { api, keys } from "./api";
-import { formatDate, formatMoney, linkClass, setTitle } from "./format";
+import { linkClass, setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 import { SetSettings } from "./set-settings";
 import { TireList } from "./tire-list";
 // The chart library is most of this page's JavaScript: it loads after the
@@ -27,6 +29,7 @@ const WearChart = dynamic(() => import("./wear-chart").then((m) => m.WearChart),
 });
 
 export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: string }) {
+  const f = useFormat();
   const { data } = useQuery({ queryKey: keys.set(initial.set.id), queryFn: () => api<SetDetail>(`/api/sets/${initial.set.id}`), initialData: initial });
   const d = data ?? initial;
   const s = d.set;
@@ -65,16 +68,16 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
           <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
             <dt className="text-asphalt-600">Depth limit</dt>
             <dd>
-              {formatDepth(s.limit.minMm, depthUnit)} — {s.limit.source}
+              {f.depth(s.limit.minMm, depthUnit)} — {s.limit.source}
               {s.limit.legal ? " (legal minimum)" : ""}
             </dd>
             <dt className="text-asphalt-600">Bought</dt>
             <dd>
-              {formatDate(s.purchasedOn)}
+              {f.date(s.purchasedOn)}
               {s.seller ? ` from ${s.seller}` : ""}
             </dd>
             <dt className="text-asphalt-600">Price</dt>
-            <dd>{formatMoney(s.priceCents, s.currency)}</dd>
+            <dd>{f.money(s.priceCents, s.currency)}</dd>
           </dl>
           {s.limit.note ? <p className="text-xs text-asphalt-600">{s.limit.note}</p> : null}
           {s.axleAdvice.length ? (
@@ -93,7 +96,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         <h2 id="tires-h" className="text-xl font-bold">
           Each tire
         </h2>
-        <TireList tires={s.tires} depthUnit={depthUnit} showPattern limitMm={s.limit.minMm} />
+        <TireList tires={s.tires} depthUnit={depthUnit} showPattern limitMm={s.limit.minMm} edit={{ vehicleId: d.vehicle.id, setId: s.id, kind: s.kind.replace("_", "-") as SetKind }} />
         {s.tires.some((t) => t.ageReason || t.depthReason) ? (
           <details className="rounded border border-asphalt-200 bg-white p-3 text-sm">
             <summary className="cursor-pointer font-semibold">Why each condition</summary>
@@ -115,32 +118,35 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         {d.checks.length === 0 ? (
           <p className="text-asphalt-600">No checks yet.</p>
         ) : (
-          <div className="overflow-x-auto rounded border border-asphalt-200">
-            <table className="w-full min-w-[36rem] text-left text-sm" data-testid="readings-table">
+          <div className="rounded border border-asphalt-200">
+            <table className="w-full text-left text-sm" data-testid="readings-table">
               <thead className="bg-asphalt-100">
                 <tr>
                   <th scope="col" className="px-3 py-2">Date</th>
-                  <th scope="col" className="px-3 py-2">Odometer</th>
+                  <th scope="col" className="hidden px-3 py-2 md:table-cell">Odometer</th>
                   <th scope="col" className="px-3 py-2">Tire</th>
                   <th scope="col" className="px-3 py-2">Inner · centre · outer</th>
-                  <th scope="col" className="px-3 py-2">Pressure</th>
-                  <th scope="col" className="px-3 py-2">By</th>
+                  <th scope="col" className="hidden px-3 py-2 md:table-cell">Pressure</th>
+                  <th scope="col" className="hidden px-3 py-2 md:table-cell">By</th>
                 </tr>
               </thead>
               <tbody>
                 {(showAll ? d.checks : d.checks.slice(0, 3)).flatMap((c) =>
                   c.readings.map((r) => (
                     <tr key={`${c.id}-${r.tireId}`} className="border-t border-asphalt-200">
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDate(c.checkedOn)}</td>
-                      <td className="px-3 py-2 whitespace-nowrap">{formatDistance(c.odometerKm, distanceUnit)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">{f.date(c.checkedOn)}</td>
+                      <td className="hidden px-3 py-2 whitespace-nowrap md:table-cell">{f.distance(c.odometerKm, distanceUnit)}</td>
                       <td className="px-3 py-2">{positionOf.get(r.tireId) ?? "—"}</td>
                       <td className="px-3 py-2">
                         {r.approximate
-                          ? `about ${formatDepth(r.centreMm, depthUnit)} (coin)`
-                          : [r.innerMm, r.centreMm, r.outerMm].map((x) => formatDepth(x, depthUnit)).join(" · ")}
+                          ? `about ${f.depth(r.centreMm, depthUnit)} (coin)`
+                          : [r.innerMm, r.centreMm, r.outerMm].map((x) => f.depth(x, depthUnit)).join(" · ")}
+                        <span className="mt-1 block text-asphalt-600 md:hidden">
+                          {[f.distance(c.odometerKm, distanceUnit), r.pressureKpa != null ? f.pressure(r.pressureKpa, d.viewer.pressureUnit) : null, c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"].filter(Boolean).join(" · ")}
+                        </span>
                       </td>
-                      <td className="px-3 py-2">{formatPressure(r.pressureKpa, d.viewer.pressureUnit)}</td>
-                      <td className="px-3 py-2">{c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"}</td>
+                      <td className="hidden px-3 py-2 md:table-cell">{f.pressure(r.pressureKpa, d.viewer.pressureUnit)}</td>
+                      <td className="hidden px-3 py-2 md:table-cell">{c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You"}</td>
                     </tr>
                   )),
                 )}
@@ -150,7 +156,7 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         )}
         {d.checks.length > 3 ? (
           <Button type="button" variant="secondary" size="sm" onClick={() => setShowAll((x) => !x)} aria-expanded={showAll}>
-            {showAll ? "Show the latest three checks" : `Show all ${d.checks.length} checks`}
+            {showAll ? "Show the latest three checks" : `Show all ${f.count(d.checks.length, { one: "check", other: "checks" })}`}
           </Button>
         ) : null}
       </section>

@@ -1,14 +1,38 @@
+"use client";
 // A set's tires: position, DOT week, age, depth and condition, as a list
 // that reads on a phone and as a grid on a desktop.
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useId, useState } from "react";
+import { toast } from "sonner";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { TireTreadProfile } from "@/components/visual/tread-profile";
+import { Field, Input, Select } from "@/components/ui/field";
+import { FormActions } from "@/components/ui/form-actions";
+import type { SetKind } from "@/lib/tires";
 import type { TireView } from "@/db/queries/logbook-view";
-import { formatDepth, type DepthUnit } from "@/lib/units";
-import { POSITION_LABELS } from "@/lib/validation/logbook";
-import { formatAge, formatDate } from "./format";
+import type { DepthUnit } from "@/lib/units";
+import { POSITION_LABELS, POSITIONS, type PositionValue } from "@/lib/validation/logbook";
+import { api, ApiError, keys } from "./api";
+import { DotPreview } from "./live-decode";
+import { useFormat } from "@/components/format/format-provider";
 
-/** With `limitMm`, each tire shows its tread-profile glyph against that limit. */
-export function TireList({ tires, depthUnit, showPattern = false, limitMm }: { tires: TireView[]; depthUnit: DepthUnit; showPattern?: boolean; limitMm?: number }) {
+/** With `limitMm`, each tire shows its tread-profile glyph against that limit; `edit` lets the owner correct a tire's DOT code and position in place. */
+export function TireList({
+  tires,
+  depthUnit,
+  showPattern = false,
+  limitMm,
+  edit,
+}: {
+  tires: TireView[];
+  depthUnit: DepthUnit;
+  showPattern?: boolean;
+  limitMm?: number;
+  edit?: { vehicleId: string; setId: string; kind: SetKind };
+}) {
+  const f = useFormat();
   if (tires.length === 0) return <p className="text-sm text-asphalt-600">No tires recorded for this set.</p>;
   return (
     <ul className="grid gap-2 sm:grid-cols-2" aria-label="Tires">
@@ -25,21 +49,27 @@ export function TireList({ tires, depthUnit, showPattern = false, limitMm }: { t
             <dt className="text-asphalt-600">DOT</dt>
             <dd className="font-mono">{t.dotCode ?? "not recorded"}</dd>
             <dt className="text-asphalt-600">Made</dt>
-            <dd>{t.dot?.ok ? `week ${t.dot.week} of ${t.dot.year} (from ${formatDate(t.dot.weekStart)})` : t.dot ? t.dot.error : "unknown"}</dd>
+            <dd>
+              {t.dot?.ok
+                ? `week ${t.dot.week} of ${t.dot.year} (from ${f.date(t.dot.weekStart)})`
+                : t.dot
+                  ? t.dot.error
+                  : "unknown: read the DOT code on the sidewall (its last four digits are the week and year) and add it"}
+            </dd>
             <dt className="text-asphalt-600">Age</dt>
             <dd>
-              {formatAge(t.age)}
-              {t.replaceFrom ? <span className="text-asphalt-600"> · replace by {formatDate(t.replaceFrom)}</span> : null}
+              {f.age(t.age)}
+              {t.replaceFrom ? <span className="text-asphalt-600"> · replace by {f.date(t.replaceFrom)}</span> : null}
             </dd>
             <dt className="text-asphalt-600">Depth</dt>
             <dd>
               {t.latest ? (
                 <>
                   {t.latest.approximate ? "about " : ""}
-                  {formatDepth(t.depthMm, depthUnit)} on {formatDate(t.latest.checkedOn)}
+                  {f.depth(t.depthMm, depthUnit)} on {f.date(t.latest.checkedOn)}
                 </>
               ) : t.depthMm != null ? (
-                <>{formatDepth(t.depthMm, depthUnit)} when new</>
+                <>{f.depth(t.depthMm, depthUnit)} when new</>
               ) : (
                 "no check yet"
               )}
@@ -56,12 +86,13 @@ export function TireList({ tires, depthUnit, showPattern = false, limitMm }: { t
               <>
                 <dt className="text-asphalt-600">At limit</dt>
                 <dd>
-                  {t.projection.projectedDate ? `reached around ${formatDate(t.projection.projectedDate)}` : "no date yet"}
+                  {t.projection.projectedDate ? `reached around ${f.date(t.projection.projectedDate)}` : "no date yet"}
                   {t.projection.method === "typical-rate" ? " (estimated from a typical wear rate)" : ` (confidence: ${t.projection.confidence})`}
                 </dd>
               </>
             ) : null}
           </dl>
+          {edit ? <TireEditor tire={t} edit={edit} /> : null}
         </li>
       ))}
     </ul>
@@ -75,3 +106,62 @@ export const PATTERN_LABEL: Record<NonNullable<TireView["pattern"]>["kind"], str
   "inner-shoulder": "Worn on the inner shoulder",
   "outer-shoulder": "Worn on the outer shoulder",
 };
+
+function TireEditor({ tire, edit }: { tire: TireView; edit: { vehicleId: string; setId: string; kind: SetKind } }) {
+  const queryClient = useQueryClient();
+  const id = useId();
+  const [open, setOpen] = useState(false);
+  const [code, setCode] = useState(tire.dotCode ?? "");
+  const [position, setPosition] = useState<PositionValue>(tire.position);
+  const save = useMutation({
+    mutationFn: () => api(`/api/tires/${tire.id}`, { method: "PATCH", body: { dotCode: code, position } }),
+    onSuccess: async () => {
+      setOpen(false);
+      toast.success(`${POSITION_LABELS[position]}: saved.`);
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: keys.vehicle(edit.vehicleId) }),
+        queryClient.invalidateQueries({ queryKey: keys.set(edit.setId) }),
+        queryClient.invalidateQueries({ queryKey: keys.overview }),
+      ]);
+    },
+  });
+  const err = save.error instanceof ApiError ? save.error : null;
+  if (!open) {
+    return (
+      <Button type="button" size="sm" variant="secondary" className="mt-2" onClick={() => setOpen(true)}>
+        {tire.dotCode ? "Correct the DOT code or position" : "Add the DOT code"}
+        <span className="sr-only"> of the {POSITION_LABELS[tire.position].toLowerCase()} tire</span>
+      </Button>
+    );
+  }
+  return (
+    <form
+      className="mt-2 space-y-2 rounded border border-groove-200 bg-groove-50 p-2"
+      aria-label={`Edit the ${POSITION_LABELS[tire.position].toLowerCase()} tire`}
+      onSubmit={(e) => {
+        e.preventDefault();
+        save.mutate();
+      }}
+    >
+      {err && !Object.keys(err.fields).length ? <Alert tone="error">{err.message}</Alert> : null}
+      <Field label="DOT code" error={err?.fields.dotCode}>
+        {({ id: inputId, describedBy, invalid }) => (
+          <Input id={inputId} aria-describedby={`${describedBy ?? ""} ${id}-dot`.trim()} aria-invalid={invalid} value={code} onChange={(e) => setCode(e.target.value)} autoComplete="off" className="font-mono" />
+        )}
+      </Field>
+      <DotPreview id={`${id}-dot`} code={code} kind={edit.kind} />
+      <Field label="Position" hint="A position another tire holds swaps the two." error={err?.fields.position}>
+        {({ id: inputId, describedBy }) => (
+          <Select id={inputId} aria-describedby={describedBy} value={position} onChange={(e) => setPosition(e.target.value as PositionValue)}>
+            {POSITIONS.map((p) => (
+              <option key={p} value={p}>
+                {POSITION_LABELS[p]}
+              </option>
+            ))}
+          </Select>
+        )}
+      </Field>
+      <FormActions pending={save.isPending} submitLabel="Save the tire" onCancel={() => setOpen(false)} />
+    </form>
+  );
+}

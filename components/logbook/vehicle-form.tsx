@@ -30,14 +30,27 @@ type Values = {
   odometerUnit: "km" | "mi";
 };
 
-export function VehicleForm({ pressureUnit, odometerUnit, then }: { pressureUnit: PressureUnit; odometerUnit: "km" | "mi"; then?: "log-purchase" }) {
+export type VehicleFormValues = Values;
+
+/** With `existing`, the form changes that vehicle (PATCH) instead of adding one. */
+export function VehicleForm({
+  pressureUnit,
+  odometerUnit,
+  then,
+  existing,
+}: {
+  pressureUnit: PressureUnit;
+  odometerUnit: "km" | "mi";
+  then?: "log-purchase";
+  existing?: { id: string; values: Partial<Values> };
+}) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [error, setError] = useState<string | null>(null);
   const form = useForm<Values>({
     resolver: zodResolver(vehicleSchema) as unknown as Resolver<Values>,
     mode: "onTouched",
-    defaultValues: { nickname: "", make: "", model: "", year: "", vin: "", plate: "", placardFrontSize: "", placardRearSize: "", placardFrontPressure: "", placardRearPressure: "", pressureUnit, odometerUnit },
+    defaultValues: { nickname: "", make: "", model: "", year: "", vin: "", plate: "", placardFrontSize: "", placardRearSize: "", placardFrontPressure: "", placardRearPressure: "", pressureUnit, odometerUnit, ...existing?.values },
   });
   const { register, formState } = form;
   const w = useWatch({ control: form.control });
@@ -57,6 +70,13 @@ export function VehicleForm({ pressureUnit, odometerUnit, then }: { pressureUnit
       onSubmit={form.handleSubmit(async (values) => {
         setError(null);
         try {
+          if (existing) {
+            await api(`/api/vehicles/${existing.id}`, { method: "PATCH", body: values });
+            await Promise.all([queryClient.invalidateQueries({ queryKey: keys.overview }), queryClient.invalidateQueries({ queryKey: keys.vehicle(existing.id) })]);
+            router.push(`/vehicles/${existing.id}?saved=vehicle`);
+            router.refresh();
+            return;
+          }
           const res = await api<{ vehicle: { id: string } }>("/api/vehicles", { body: values });
           await queryClient.invalidateQueries({ queryKey: keys.overview });
           router.push(then === "log-purchase" ? `/log-purchase?vehicle=${res.vehicle.id}` : `/vehicles/${res.vehicle.id}`);
@@ -108,7 +128,7 @@ export function VehicleForm({ pressureUnit, odometerUnit, then }: { pressureUnit
         {text("placardRearPressure", "Placard pressure, rear", { inputMode: "decimal" })}
       </Card>
       <Button type="submit" size="lg" className="w-full sm:w-auto" pending={formState.isSubmitting} pendingLabel="Saving the vehicle…">
-        Save the vehicle
+        {existing ? "Save the changes" : "Save the vehicle"}
       </Button>
     </form>
   );

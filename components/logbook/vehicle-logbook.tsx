@@ -6,7 +6,9 @@ import { AccessLogTable } from "@/components/passes/access-log-table";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
-import { useState } from "react";
+import { useCallback, useMemo, useState } from "react";
+import { toast } from "sonner";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { buttonVariants } from "@/components/ui/button-variants";
@@ -16,11 +18,13 @@ import { Field, Input } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
-import { depthUnitFor, formatDistance } from "@/lib/units";
+import { depthUnitFor } from "@/lib/units";
+import type { SetKind } from "@/lib/tires";
 import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
-import { formatBytes, formatDate, formatMoney, linkClass, setTitle } from "./format";
-import { HistoryTable, historyRows } from "./history-table";
+import { linkClass, setTitle } from "./format";
+import { useFormat } from "@/components/format/format-provider";
+import { HistoryTable, historyRows, type HistoryRow } from "./history-table";
 import { ServiceEntryForm } from "./service-entry-form";
 import { TireList } from "./tire-list";
 import { useOlderHistory } from "./use-older-history";
@@ -54,6 +58,7 @@ export function VehicleLogbookView({
   queryUrl?: string;
   canManage?: boolean;
 }) {
+  const f = useFormat();
   const id = initial.vehicle.id;
   const { data } = useQuery({ queryKey: keys.vehicle(id), queryFn: () => api<VehicleLogbook>(queryUrl ?? `/api/vehicles/${id}`), initialData: initial });
   const book = data ?? initial;
@@ -61,12 +66,25 @@ export function VehicleLogbookView({
   const depthUnit = depthUnitFor(book.viewer.units);
   const distanceUnit = v.odometerUnit;
   const mounted = book.sets.find((s) => s.state === "mounted") ?? null;
+  // The table needs the same array until the logbook itself changes (see HistoryTable).
+  const rows = useMemo(() => historyRows(book, depthUnit, f), [book, depthUnit, f]);
+  const queryClient = useQueryClient();
+  const deleteEntry = useCallback(
+    async (row: HistoryRow) => {
+      const [kind, ...rest] = row.id.split("-");
+      const entryId = rest.join("-");
+      await api(kind === "c" ? `/api/checks/${entryId}` : `/api/service-entries/${entryId}`, { method: "DELETE" });
+      toast.success(`${row.type} of ${f.date(row.date)} deleted.`);
+      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(id) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
+    },
+    [f, id, queryClient],
+  );
 
   return (
     <>
       <PageHeader
         title={v.nickname}
-        description={`${v.make} ${v.model}${v.year ? ` · ${v.year}` : ""}${v.plate ? ` · ${v.plate}` : ""}${book.lastOdometer ? ` · ${formatDistance(book.lastOdometer.odometerKm, distanceUnit)} on ${formatDate(book.lastOdometer.date)}` : ""}`}
+        description={`${v.make} ${v.model}${v.year ? ` · ${v.year}` : ""}${v.plate ? ` · ${v.plate}` : ""}${book.lastOdometer ? ` · ${f.distance(book.lastOdometer.odometerKm, distanceUnit)} on ${f.date(book.lastOdometer.date)}` : ""}`}
         actions={
           canManage ? (
           <>
@@ -76,11 +94,15 @@ export function VehicleLogbookView({
             <Link href={`/log-purchase?vehicle=${id}`} className={buttonVariants({ variant: "secondary" })}>
               Log a purchase
             </Link>
+            <Link href={`/vehicles/${id}/edit`} className={buttonVariants({ variant: "ghost" })}>
+              Change or delete the vehicle
+            </Link>
           </>
           ) : null
         }
       />
       {saved === "set" ? <Alert tone="success" className="mb-4">The new set is saved in the logbook.</Alert> : null}
+      {saved === "vehicle" ? <Alert tone="success" className="mb-4">The vehicle is saved.</Alert> : null}
       {saved === "check" ? <Alert tone="success" className="mb-4">The tread check is saved.</Alert> : null}
 
       <section aria-labelledby="sets-h" className="mb-8 space-y-4">
@@ -105,7 +127,7 @@ export function VehicleLogbookView({
         {canManage ? (
           <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
         ) : null}
-        <HistoryTable rows={historyRows(book, depthUnit)} distanceUnit={distanceUnit} />
+        <HistoryTable rows={rows} distanceUnit={distanceUnit} onDelete={canManage ? deleteEntry : undefined} />
         {canManage ? <OlderHistory book={book} /> : null}
       </section>
 
@@ -113,7 +135,7 @@ export function VehicleLogbookView({
         <h2 id="files-h" className="text-xl font-bold">
           Receipts and photos
         </h2>
-        {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} />}
+        {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} deletable={canManage ? id : undefined} />}
       </section>
 
       {canManage ? (
@@ -147,6 +169,7 @@ function SetCard({
   files: VehicleLogbook["attachments"];
   canManage: boolean;
 }) {
+  const f = useFormat();
   const state =
     set.state === "mounted" ? "On the car" : set.state === "stored" ? `Stored${set.storageLocation ? ` at ${set.storageLocation}` : ""}` : "Retired";
   return (
@@ -164,14 +187,14 @@ function SetCard({
           </h3>
           <p className="text-sm text-asphalt-600">
             {SET_KIND_LABELS[set.kind]} · {set.size} · {state}
-            {set.purchasedOn ? ` · bought ${formatDate(set.purchasedOn)}` : ""}
+            {set.purchasedOn ? ` · bought ${f.date(set.purchasedOn)}` : ""}
             {set.seller ? ` from ${set.seller}` : ""}
-            {set.priceCents != null ? ` · ${formatMoney(set.priceCents, set.currency)}` : ""}
+            {set.priceCents != null ? ` · ${f.money(set.priceCents, set.currency)}` : ""}
           </p>
         </div>
         {set.condition ? <ConditionBadge condition={set.condition} detail="set" /> : null}
       </div>
-      <TireList tires={set.tires} depthUnit={depthUnit} limitMm={set.limit.minMm} />
+      <TireList tires={set.tires} depthUnit={depthUnit} limitMm={set.limit.minMm} edit={canManage ? { vehicleId, setId: set.id, kind: set.kind.replace("_", "-") as SetKind } : undefined} />
       {set.axleAdvice.length ? (
         <ul className="list-disc pl-5 text-sm text-asphalt-700">
           {set.axleAdvice.map((a) => (
@@ -199,6 +222,7 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
   const [date, setDate] = useState(todayIso());
   const [odometer, setOdometer] = useState("");
   const [confirmLower, setConfirmLower] = useState(false);
+  const [storageError, setStorageError] = useState<string | null>(null);
   const swap = useMutation({
     mutationFn: () => api(`/api/vehicles/${vehicleId}/swap`, { body: { setId: set.id, storageLocation: storage, date, odometer, confirmLowerOdometer: confirmLower } }),
     onSuccess: async () => {
@@ -222,13 +246,19 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
       className="w-full space-y-3 rounded border border-groove-200 bg-groove-50 p-3"
       onSubmit={(e) => {
         e.preventDefault();
+        // The set coming off needs a place: said here, before the server is asked.
+        if (!storage.trim()) {
+          setStorageError(mounted ? `Say where ${setTitle(mounted)} will be kept.` : "Say where the set coming off is kept.");
+          return;
+        }
+        setStorageError(null);
         swap.mutate();
       }}
     >
       <p className="font-semibold">Seasonal swap: {setTitle(set)} goes on the car{mounted ? `, ${setTitle(mounted)} comes off` : ""}.</p>
       {err ? <Alert tone="error">{err.message}</Alert> : null}
       <div className="grid gap-3 sm:grid-cols-3">
-        <Field label={mounted ? `Where ${setTitle(mounted)} will be kept` : "Where the set coming off is kept"} error={err?.fields.storageLocation}>
+        <Field label={mounted ? `Where ${setTitle(mounted)} will be kept` : "Where the set coming off is kept"} error={storageError ?? err?.fields.storageLocation}>
           {({ id, describedBy, invalid }) => <Input id={id} aria-describedby={describedBy} aria-invalid={invalid} value={storage} onChange={(e) => setStorage(e.target.value)} />}
         </Field>
         <Field label="Date" error={err?.fields.date}>
@@ -248,17 +278,37 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
   );
 }
 
-function FileList({ files }: { files: VehicleLogbook["attachments"] }) {
+/** `deletable` (the vehicle's id) adds a delete button with a confirmation to each file. */
+function FileList({ files, deletable }: { files: VehicleLogbook["attachments"]; deletable?: string }) {
+  const fmt = useFormat();
+  const queryClient = useQueryClient();
   return (
     <ul className="flex flex-wrap gap-2" aria-label="Files">
       {files.map((f) => (
-        <li key={f.id}>
+        <li key={f.id} className="flex items-center">
           <a href={`/api/attachments/${f.id}`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center gap-2 rounded border border-asphalt-200 bg-white px-3 text-sm">
             {f.mimeType.startsWith("image/") ? <ImageIcon aria-hidden className="size-4" /> : <FileText aria-hidden className="size-4" />}
             <span>
-              {f.kind === "receipt" ? "Receipt" : f.kind === "photo" ? "Photo" : "Document"}: {f.fileName} <span className="text-asphalt-600">({formatBytes(f.sizeBytes)})</span>
+              {f.kind === "receipt" ? "Receipt" : f.kind === "photo" ? "Photo" : "Document"}: {f.fileName} <span className="text-asphalt-600">({fmt.bytes(f.sizeBytes)})</span>
             </span>
           </a>
+          {deletable ? (
+            <ConfirmDialog
+              trigger={
+                <Button type="button" size="sm" variant="ghost" className="ml-1">
+                  Delete<span className="sr-only"> {f.fileName}</span>
+                </Button>
+              }
+              title={`Delete ${f.fileName}?`}
+              description={<p>The file leaves the logbook for good. The set and its history stay.</p>}
+              confirmLabel="Delete the file"
+              onConfirm={async () => {
+                await api(`/api/attachments/${f.id}`, { method: "DELETE" });
+                toast.success(`${f.fileName} deleted.`);
+                await queryClient.invalidateQueries({ queryKey: keys.vehicle(deletable) });
+              }}
+            />
+          ) : null}
         </li>
       ))}
     </ul>

@@ -11,7 +11,7 @@ import { kmToDistance, mmToDepth, type DepthUnit, type DistanceUnit } from "@/li
 import { POSITION_LABELS } from "@/lib/validation/logbook";
 import { DEPTH_PLAN_MARGIN_MM, DEPTH_WATCH_MARGIN_MM } from "@/lib/tires";
 import { asphalt, condition, limitZone } from "@/lib/visual/tokens";
-import { formatDate } from "./format";
+import { useFormat } from "@/components/format/format-provider";
 
 // Each tire's own colour and marker: identities, not conditions, so none of them is a condition colour.
 const LOOK = [
@@ -53,6 +53,7 @@ function Marker({ cx, cy, stroke, shape }: { cx?: number; cy?: number; stroke: s
 }
 
 export function WearChart({ tires, limitMm, limitSource, depthUnit, distanceUnit }: { tires: TireView[]; limitMm: number; limitSource?: string; depthUnit: DepthUnit; distanceUnit: DistanceUnit }) {
+  const f = useFormat();
   const [axis, setAxis] = useState<"date" | "odometer">("date");
   const withData = tires.filter((t) => t.series.length > 0);
   if (withData.length === 0) {
@@ -87,8 +88,8 @@ export function WearChart({ tires, limitMm, limitSource, depthUnit, distanceUnit
   const unitLabel = depthUnit === "32nds" ? "32nds in" : "mm";
   // Evenly spaced ticks, so labels never pile up where several projections end.
   const ticks = xMax > firstX ? [0, 1, 2, 3, 4].map((i) => Math.round(firstX + ((xMax - firstX) * i) / 4)) : [firstX];
-  const tickFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)).replace(/^\d+ /, "") : `${Math.round(v / 1000)}k ${distanceUnit}`);
-  const xFormat = (v: number) => (axis === "date" ? formatDate(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
+  const tickFormat = (v: number) => (axis === "date" ? f.monthYear(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
+  const xFormat = (v: number) => (axis === "date" ? f.date(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
 
   return (
     <figure className="space-y-2">

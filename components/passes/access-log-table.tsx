@@ -1,4 +1,7 @@
+"use client";
 // The access log as the driver reads it: who, from which shop, did what, when.
+import { useFormat } from "@/components/format/format-provider";
+
 const ACTION_LABEL: Record<string, string> = {
   read_logbook: "Opened the logbook",
   add_service: "Recorded work",
@@ -14,17 +17,14 @@ export function actionLabel(action: string) {
   return ACTION_LABEL[action] ?? action.replace(/_/g, " ").replace(/^./, (c) => c.toUpperCase());
 }
 
-export function formatAt(d: Date | string) {
-  return new Date(d).toLocaleString("en-GB", { timeZone: "UTC", day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" }) + " UTC";
-}
-
 type AccessRow = { id: string; at: Date | string; actorName: string; shopName: string; action: string; detail: string | null; count?: number; lastAt?: Date | string | null };
 
 export function AccessLogTable({ rows }: { rows: AccessRow[] }) {
+  const f = useFormat();
   if (rows.length === 0) return <p className="text-sm text-asphalt-600">No shop has opened this logbook yet.</p>;
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full min-w-[34rem] text-left text-sm">
+    <div>
+      <table className="w-full text-left text-sm">
         <thead className="border-b border-asphalt-200 text-asphalt-600">
           <tr>
             <th scope="col" className="py-2 pr-3 font-semibold">When</th>
@@ -35,7 +35,7 @@ export function AccessLogTable({ rows }: { rows: AccessRow[] }) {
         <tbody className="divide-y divide-asphalt-100">
           {rows.map((r) => (
             <tr key={r.id}>
-              <td className="whitespace-nowrap py-2 pr-3 tabular-nums">{formatAt(r.at)}</td>
+              <td className="py-2 pr-3 tabular-nums">{f.dateTime(r.at)}</td>
               <td className="py-2 pr-3">
                 {r.actorName} <span className="text-asphalt-600">· {r.shopName}</span>
               </td>
@@ -46,7 +46,7 @@ export function AccessLogTable({ rows }: { rows: AccessRow[] }) {
                 {r.count && r.count > 1 ? (
                   <span className="text-asphalt-600">
                     {" "}
-                    · {r.count} times{r.lastAt ? `, last ${formatAt(r.lastAt)}` : ""}
+                    · {f.count(r.count, { one: "# time", other: "# times" })}{r.lastAt ? `, last ${f.dateTime(r.lastAt)}` : ""}
                   </span>
                 ) : null}
               </td>

@@ -1,6 +1,7 @@
 "use client";
 // A set the shop fitted: size, kind and each tire's DOT code, decoded as it
 // is typed (lib/tires), saved with a fitting entry in one transaction.
+import { useFormat } from "@/components/format/format-provider";
 import { useRouter } from "next/navigation";
 import { useId, useMemo, useState } from "react";
 import { Alert } from "@/components/ui/alert";
@@ -17,10 +18,15 @@ function DotHint({ code, today }: { code: string; today: string }) {
   if (!d) return <span className="text-asphalt-600">The last four digits are the week and year.</span>;
   if (!d.ok) return <span className="font-semibold text-condition-replace">{d.error}</span>;
   const age = tireAge(d.weekStart, { today });
+  return <DotHintText week={d.week} year={d.year} age={age.ok ? age : null} />;
+}
+
+function DotHintText({ week, year, age }: { week: number; year: number; age: { years: number; months: number } | null }) {
+  const f = useFormat();
   return (
     <span className="text-asphalt-700">
-      Made in week {d.week} of {d.year}
-      {age.ok ? ` · ${age.years} y ${age.months} m old` : ""}
+      Made in week {week} of {year}
+      {age ? ` · ${f.age(age)}` : ""}
     </span>
   );
 }

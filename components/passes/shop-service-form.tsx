@@ -3,7 +3,8 @@
 // set on the car. Large targets and the essentials first; when the pass has
 // ended the server refuses and the form says so, keeping what was typed.
 import { useRouter } from "next/navigation";
-import { useId, useState } from "react";
+import { useId, useRef, useState } from "react";
+import { toast } from "sonner";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
@@ -43,6 +44,17 @@ export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnde
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<{ tone: "error" | "success"; text: string } | null>(null);
   const [askConfirm, setAskConfirm] = useState(false);
+  const [askDepth, setAskDepth] = useState(false);
+  const [confirmDepth, setConfirmDepth] = useState(false);
+  const messageRef = useRef<HTMLDivElement>(null);
+  // On a phone the form is long and the header sticky: the outcome is brought into view, and a toast says it too.
+  const show = (m: { tone: "error" | "success"; text: string }) => {
+    setMessage(m);
+    requestAnimationFrame(() => {
+      messageRef.current?.scrollIntoView({ block: "start", behavior: "smooth" });
+      messageRef.current?.focus({ preventScroll: true });
+    });
+  };
 
   const depthLabel = ctx.depthUnit === "32nds" ? "32nds" : "mm";
   const setGroove = (tireId: string, key: keyof Grooves, value: string) => setGrooves((g) => ({ ...g, [tireId]: { ...g[tireId], [key]: value } }));
@@ -65,18 +77,23 @@ export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnde
       notes,
       confirmLowerOdometer: confirmLower,
       setId: ctx.set?.id ?? "",
-      checks: withCheck && ctx.set && readings.length > 0 ? [{ setId: ctx.set.id, method: "gauge", depthUnit: ctx.depthUnit, pressureUnit: ctx.pressureUnit, readings }] : [],
+      checks: withCheck && ctx.set && readings.length > 0 ? [{ setId: ctx.set.id, method: "gauge", depthUnit: ctx.depthUnit, pressureUnit: ctx.pressureUnit, readings, confirmUnusualDepth: confirmDepth }] : [],
     };
     const res = await sendJson(`/api/passes/${ctx.passId}/vehicles/${ctx.vehicleId}/service`, { body });
     setPending(false);
     if (!res.ok) {
       if (res.code === "pass_ended") onEnded?.(res.message);
-      setMessage({ tone: "error", text: res.message });
+      show({ tone: "error", text: res.message });
       setFields(res.fields ?? {});
       if (res.status === 409 && res.fields?.odometer) setAskConfirm(true);
+      if (res.status === 409 && res.fields?.confirmUnusualDepth) setAskDepth(true);
       return;
     }
-    setMessage({ tone: "success", text: `${SERVICE_KIND_LABELS[kind]} saved to the driver's logbook${body.checks.length ? ", with the tread check" : ""}. The driver got an e-mail.` });
+    const text = `${SERVICE_KIND_LABELS[kind]} saved to the driver's logbook${body.checks.length ? ", with the tread check" : ""}. The driver got an e-mail.`;
+    show({ tone: "success", text });
+    toast.success(text);
+    setConfirmDepth(false);
+    setAskDepth(false);
     setNotes("");
     setCost("");
     setConfirmLower(false);
@@ -90,7 +107,9 @@ export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnde
       <h2 id={`${id}-title`} className="text-xl font-bold">
         Record work
       </h2>
-      {message ? <Alert tone={message.tone}>{message.text}</Alert> : null}
+      <div ref={messageRef} tabIndex={-1} className="scroll-mt-24 outline-none" data-testid="work-outcome">
+        {message ? <Alert tone={message.tone}>{message.text}</Alert> : null}
+      </div>
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Work done" error={fe("kind")}>
           {({ id: fid, describedBy, invalid }) => (
@@ -119,6 +138,12 @@ export function ShopServiceForm({ ctx, onEnded }: { ctx: ShopFormContext; onEnde
           )}
         </Field>
       </div>
+      {askDepth ? (
+        <label className="flex min-h-12 items-center gap-3 rounded border border-condition-watch/40 bg-condition-watch-bg px-3 text-condition-watch">
+          <input type="checkbox" className="size-5" checked={confirmDepth} onChange={(e) => setConfirmDepth(e.target.checked)} />
+          The depths marked below are right (deeper than new or than the last reading)
+        </label>
+      ) : null}
       {askConfirm ? (
         <label className="flex min-h-12 items-center gap-3 rounded border border-condition-watch/40 bg-condition-watch-bg px-3 text-condition-watch">
           <input type="checkbox" className="size-5" checked={confirmLower} onChange={(e) => setConfirmLower(e.target.checked)} />

@@ -8,7 +8,8 @@ import { ConditionBadge } from "@/components/ui/condition-badge";
 import { TireTreadProfile } from "@/components/visual/tread-profile";
 import type { TireView } from "@/db/queries/logbook-view";
 import { cn } from "@/lib/cn";
-import { formatDepth, type DepthUnit } from "@/lib/units";
+import { DEFAULT_PREFS, formatter } from "@/lib/format";
+import type { DepthUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/logbook";
 
 type Side = "left" | "right";
@@ -65,6 +66,9 @@ function WheelStation({ tire, side, limitMm, depthUnit, measurable }: { tire: Ti
     </div>
   );
 }
+
+// Shared by server and client components: depths need no zone, so the default formatter does.
+const formatDepth = (mm: number | null | undefined, unit: DepthUnit) => formatter(DEFAULT_PREFS).depth(mm, unit);
 
 export function VehiclePlan({ tires, limitMm, depthUnit, measurable }: { tires: TireView[]; limitMm: number; depthUnit: DepthUnit; measurable: boolean }) {
   const at = (p: string) => tires.find((t) => t.position === p);

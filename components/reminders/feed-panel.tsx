@@ -1,5 +1,7 @@
 "use client";
 // The calendar feed: make a link, copy it, scan it, or turn it off.
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
+import { useFormat } from "@/components/format/format-provider";
 import { CalendarPlus, Check, Copy, Laptop, Globe, Smartphone } from "lucide-react";
 import { useState, useTransition } from "react";
 import { createFeedLink, turnOffFeed, type NewFeed } from "@/app/(driver)/reminders/actions";
@@ -49,7 +51,8 @@ function CopyField({ label, value, id }: { label: string; value: string; id: str
   );
 }
 
-export function FeedPanel({ feed, timezone }: { feed: FeedState; timezone: string }) {
+export function FeedPanel({ feed }: { feed: FeedState; timezone?: string }) {
+  const f = useFormat();
   const [fresh, setFresh] = useState<NewFeed | null>(null);
   const [state, setState] = useState<FeedState>(feed);
   const [error, setError] = useState<string | null>(null);
@@ -113,9 +116,9 @@ export function FeedPanel({ feed, timezone }: { feed: FeedState; timezone: strin
         </div>
       ) : state ? (
         <p className="text-asphalt-700" data-testid="feed-active">
-          A feed link is active since {new Date(state.createdAt).toLocaleDateString("en-GB", { timeZone: timezone, day: "numeric", month: "short", year: "numeric" })}
+          A feed link is active since {f.dateOf(state.createdAt)}
           {state.lastFetchedAt
-            ? `; a calendar app last read it on ${new Date(state.lastFetchedAt).toLocaleString("en-GB", { timeZone: timezone, day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" })}.`
+            ? `; a calendar app last read it on ${f.dateTime(state.lastFetchedAt)}.`
             : "; no calendar app has read it yet."}{" "}
           Fourpatch keeps only a fingerprint of the link, so it cannot show it again. To subscribe another device, make a new link — the old
           one then stops working, so subscribe your other devices again with the new one.
@@ -128,9 +131,31 @@ export function FeedPanel({ feed, timezone }: { feed: FeedState; timezone: strin
       )}
 
       <div className="flex flex-wrap gap-2">
-        <Button type="button" variant={state ? "secondary" : "primary"} onClick={makeLink} pending={pending && working === "new"} pendingLabel="Making a link…">
-          {fresh ? "Make another link (this one stops)" : state ? "Make a new feed link" : "Make my calendar link"}
-        </Button>
+        {state ? (
+          // A new link ends the old one: every calendar subscribed to it stops getting dates. Said first.
+          <ConfirmDialog
+            tone="primary"
+            trigger={
+              <Button type="button" variant="secondary" pending={pending && working === "new"} pendingLabel="Making a link…">
+                {fresh ? "Make another link (this one stops)" : "Make a new feed link"}
+              </Button>
+            }
+            title="Make a new feed link?"
+            description={
+              <p>
+                The current link stops working at once. Every calendar subscribed to it stops getting tire dates, and its dates disappear; you will
+                need to subscribe each device again with the new link.
+              </p>
+            }
+            confirmLabel="Make a new link"
+            cancelLabel="Keep the current link"
+            onConfirm={makeLink}
+          />
+        ) : (
+          <Button type="button" variant="primary" onClick={makeLink} pending={pending && working === "new"} pendingLabel="Making a link…">
+            Make my calendar link
+          </Button>
+        )}
         {state && !confirmOff ? (
           <Button type="button" variant="secondary" onClick={() => setConfirmOff(true)} disabled={pending}>
             Turn the feed off

@@ -1,9 +1,11 @@
+"use client";
 // The coming reminders in date order, each with its reason and a word for
 // how pressing it is (never colour alone).
 import { CalendarDays } from "lucide-react";
 import Link from "next/link";
 import { ConditionBadge } from "@/components/ui/condition-badge";
-import { formatDay, logbookPath, whatToDo } from "@/lib/reminders/describe";
+import { useFormat } from "@/components/format/format-provider";
+import { logbookPath, whatToDo } from "@/lib/reminders/describe";
 import { CAUTION, type ReminderItem } from "@/lib/tires";
 
 function SeverityBadge({ item }: { item: ReminderItem }) {
@@ -19,6 +21,7 @@ function SeverityBadge({ item }: { item: ReminderItem }) {
 }
 
 export function ReminderList({ items }: { items: ReminderItem[] }) {
+  const f = useFormat();
   if (items.length === 0) {
     return (
       <p className="text-asphalt-700">
@@ -33,7 +36,7 @@ export function ReminderList({ items }: { items: ReminderItem[] }) {
         <li key={item.id} className="flex flex-col gap-2 py-4 sm:flex-row sm:gap-4" data-reminder-id={item.id} data-kind={item.kind}>
           <div className="shrink-0 sm:w-36">
             <time dateTime={item.date} className="block font-mono text-sm font-semibold text-asphalt-900">
-              {formatDay(item.date)}
+              {f.day(item.date)}
             </time>
             {item.overdue ? <span className="text-xs font-semibold text-condition-replace">Date has passed</span> : null}
           </div>

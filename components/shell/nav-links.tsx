@@ -8,8 +8,9 @@ export type NavItem = { href: string; label: string; exact?: boolean };
 export function NavLinks({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
   return (
-    <nav aria-label="Main" className="mx-auto max-w-6xl overflow-x-auto px-2">
-      <ul className="flex gap-1 whitespace-nowrap">
+    // On a phone every destination gets an equal column and its label may wrap: nothing is cut off or scrolled away.
+    <nav aria-label="Main" className="mx-auto max-w-6xl px-1 sm:px-2">
+      <ul className="grid auto-cols-fr grid-flow-col sm:flex sm:gap-1 sm:whitespace-nowrap">
         {items.map((item) => {
           const active = item.exact ? pathname === item.href : pathname === item.href || pathname.startsWith(`${item.href}/`);
           return (
@@ -18,7 +19,7 @@ export function NavLinks({ items }: { items: NavItem[] }) {
                 href={item.href}
                 aria-current={active ? "page" : undefined}
                 className={cn(
-                  "inline-flex min-h-11 items-center border-b-2 px-3 text-sm font-semibold no-underline",
+                  "flex min-h-11 items-center justify-center border-b-2 px-1 text-center text-xs leading-tight font-semibold no-underline sm:inline-flex sm:px-3 sm:text-sm",
                   active ? "border-groove-700 text-groove-800" : "border-transparent text-asphalt-600 hover:text-asphalt-900",
                 )}
               >

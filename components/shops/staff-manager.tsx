@@ -1,6 +1,7 @@
 "use client";
 // The owner's staff list: invite technicians by e-mail, withdraw an
 // invitation, take someone off the staff. The server checks the owner role.
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
 import { sendJson } from "@/components/passes/api";
@@ -46,15 +47,17 @@ export function StaffManager({ shopId, staff, invitations }: { shopId: string; s
               <span className="ml-2 rounded-full bg-asphalt-100 px-2 py-0.5 text-xs font-semibold text-asphalt-700">{m.role === "owner" ? "Owner" : "Technician"}</span>
             </span>
             {m.role === "technician" ? (
-              <Button
-                variant="ghost"
-                size="sm"
-                pending={busy === m.memberId}
-                pendingLabel="Removing…"
-                onClick={() => call(m.memberId, `/api/shops/${shopId}/staff/${m.memberId}`, "DELETE", undefined, `${m.name} is no longer on the staff.`)}
-              >
-                Remove {m.name.split(" ")[0]}
-              </Button>
+              <ConfirmDialog
+                trigger={
+                  <Button variant="ghost" size="sm" pending={busy === m.memberId} pendingLabel="Removing…">
+                    Remove {m.name.split(" ")[0]}
+                  </Button>
+                }
+                title={`Remove ${m.name} from the staff?`}
+                description={<p>{m.name} can no longer open the shop&apos;s passes or record work. Their own logbook stays theirs. You can invite them again later.</p>}
+                confirmLabel={`Remove ${m.name.split(" ")[0]}`}
+                onConfirm={() => call(m.memberId, `/api/shops/${shopId}/staff/${m.memberId}`, "DELETE", undefined, `${m.name} is no longer on the staff.`)}
+              />
             ) : null}
           </li>
         ))}

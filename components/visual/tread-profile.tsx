@@ -4,11 +4,15 @@
 // limit. The wear pattern (shoulder, centre, even) and the margin show
 // without a number; the text alternative has the numbers.
 import { cn } from "@/lib/cn";
-import { formatDepth, type DepthUnit } from "@/lib/units";
+import { DEFAULT_PREFS, formatter } from "@/lib/format";
+import type { DepthUnit } from "@/lib/units";
 import { asphalt, limitZone } from "@/lib/visual/tokens";
 import { GLYPH_BOX, treadProfileGeometry, treadProfileText, type TreadProfileInput } from "@/lib/visual/tread-profile";
 
 export type TreadProfileProps = TreadProfileInput & { depthUnit: DepthUnit; className?: string; "data-testid"?: string };
+
+// Shared by server and client components: depths need no zone, so the default formatter does.
+const formatDepth = (mm: number | null | undefined, unit: DepthUnit) => formatter(DEFAULT_PREFS).depth(mm, unit);
 
 export function TreadProfile({ depthUnit, className, "data-testid": testId, ...input }: TreadProfileProps) {
   const g = treadProfileGeometry(input);

@@ -8,10 +8,10 @@ import {
   depthCondition,
   depthLimit,
   JURISDICTIONS,
+  patternAdvice,
   projectWear,
   tireDepth,
   wearPattern,
-  worseCondition,
   type Condition,
   type Jurisdiction,
   type OdometerEntry,
@@ -19,6 +19,18 @@ import {
 } from "@/lib/tires";
 import { toCoreKind } from "./logbook-input";
 import type { Tire, TireSet } from "@/db/schema";
+
+/**
+ * A tire's condition as the logbook shows it: the core's four levels, plus
+ * "unknown" for a tire whose age cannot be read (no DOT code, or one that does
+ * not decode). Such a tire is never "good": its age may already be past any
+ * limit. Only a worse tread level (plan, replace) outranks it.
+ */
+export type TireCondition = Condition | "unknown";
+const ORDER: Record<TireCondition, number> = { good: 0, unknown: 1, watch: 2, plan: 3, replace: 4 };
+export function worseTireCondition(a: TireCondition, b: TireCondition): TireCondition {
+  return ORDER[a] >= ORDER[b] ? a : b;
+}
 
 export type ReadingRow = {
   checkId: string;
@@ -54,7 +66,7 @@ export type TireView = {
     confidence: string;
     notes: string[];
   } | null;
-  condition: Condition | null;
+  condition: TireCondition | null;
   /** Depth against date and odometer, oldest first: the wear chart's points. */
   series: { date: string; odometerKm: number | null; depthMm: number; approximate: boolean }[];
 };
@@ -171,8 +183,10 @@ export function tireView(opts: {
       };
     }
   }
-  const levels = [ageLevel, depthLevel].filter((x): x is Condition => x !== null);
-  const condition = levels.length ? levels.reduce(worseCondition) : null;
+  const levels: TireCondition[] = [ageLevel ?? "unknown", ...(depthLevel ? [depthLevel] : [])];
+  const condition = levels.reduce(worseTireCondition);
+  // The advice beside the wear shape follows the tire's condition, never the shape alone.
+  if (pattern) pattern = { ...pattern, advice: patternAdvice(pattern.kind, condition) };
   return {
     id: t.id,
     position: t.position,
@@ -195,9 +209,9 @@ export function tireView(opts: {
 }
 
 /** A set is in the condition of its worst tire. */
-export function setCondition(tires: TireView[]): Condition | null {
-  const levels = tires.map((t) => t.condition).filter((x): x is Condition => x !== null);
-  return levels.length ? levels.reduce(worseCondition) : null;
+export function setCondition(tires: TireView[]): TireCondition | null {
+  const levels = tires.map((t) => t.condition).filter((x): x is TireCondition => x !== null);
+  return levels.length ? levels.reduce(worseTireCondition) : null;
 }
 
 export { CAUTION };

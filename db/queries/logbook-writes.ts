@@ -6,7 +6,7 @@ import type { Transaction } from "@/db";
 import { odometerReading, serviceEntry, treadCheck, vehicle } from "@/db/schema";
 import type { LogbookAccess } from "@/lib/auth/logbook-access";
 import { AppError, forbidden } from "@/lib/errors";
-import { formatDistance } from "@/lib/units";
+import { DEFAULT_PREFS, formatter } from "@/lib/format";
 
 /** The attribution columns of a row written under this access. */
 export function authorship(access: LogbookAccess) {
@@ -46,8 +46,9 @@ export async function guardOdometer(
   // Half a kilometre of slack: miles typed by hand round differently.
   if (!last || opts.km >= last.km - 0.5) return;
   const [v] = await tx.select({ unit: vehicle.odometerUnit }).from(vehicle).where(eq(vehicle.id, opts.vehicleId)).limit(1);
-  const shown = formatDistance(last.km, v?.unit ?? "km");
-  const message = `This odometer reading is lower than the last one (${shown} on ${last.date}). If the odometer was replaced or the earlier reading was wrong, confirm to save anyway.`;
+  const f = formatter(DEFAULT_PREFS);
+  const shown = f.distance(last.km, v?.unit ?? "km");
+  const message = `This odometer reading is lower than the last one (${shown} on ${f.date(last.date)}). If the odometer was replaced or the earlier reading was wrong, confirm to save anyway.`;
   throw new AppError("conflict", message, { odometer: [message] });
 }
 

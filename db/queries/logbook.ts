@@ -25,8 +25,7 @@ import { axlePattern, distancePerDay, type Jurisdiction, type OdometerEntry, typ
 import { remindersFor } from "./reminders";
 import { loadLogbookRows, toLogbookInput } from "./logbook-input";
 import { assertVehicleAccess } from "./access";
-import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireView } from "./logbook-view";
-import type { Condition } from "@/lib/tires";
+import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireCondition, type TireView } from "./logbook-view";
 
 type Db = Transaction | typeof db;
 
@@ -67,7 +66,7 @@ export type SetView = {
   ageWatchYears: number | null;
   ageReplaceYears: number | null;
   limit: LimitView;
-  condition: Condition | null;
+  condition: TireCondition | null;
   tires: TireView[];
   axleAdvice: string[];
 };
@@ -415,12 +414,12 @@ export type VehicleSummary = {
     label: string | null;
     kind: SetView["kind"];
     size: string;
-    condition: Condition | null;
+    condition: TireCondition | null;
     /** What the overview's tread-profile glyphs need, one per tire. */
     limitMm: number;
     tires: Pick<TireView, "id" | "position" | "newDepthMm" | "latest" | "condition">[];
   } | null;
-  storedSets: { id: string; label: string | null; kind: SetView["kind"]; storageLocation: string | null; condition: Condition | null }[];
+  storedSets: { id: string; label: string | null; kind: SetView["kind"]; storageLocation: string | null; condition: TireCondition | null }[];
   nextReminder: Pick<ReminderItem, "date" | "subject" | "severity" | "overdue" | "kind"> | null;
   lastCheck: { date: string; odometerKm: number | null } | null;
 };

@@ -8,7 +8,7 @@ import { and, asc, desc, eq, gt, inArray, isNotNull, isNull, lt, lte, or, sql } 
 import { z } from "zod";
 import { createElement } from "react";
 import { db } from "@/db";
-import { accessLog, member, organization, serviceEntry, shopPass, shopPassVehicle, treadCheck, user, vehicle } from "@/db/schema";
+import { accessLog, driverProfile, member, organization, serviceEntry, shopPass, shopPassVehicle, treadCheck, user, vehicle } from "@/db/schema";
 import { assertVehicleAccess } from "@/db/queries/access";
 import PassEndedEmail from "@/emails/pass-ended";
 import PassReceivedEmail from "@/emails/pass-received";
@@ -20,6 +20,7 @@ import { sendEmail } from "@/lib/email/send";
 import { appUrl } from "@/lib/env";
 import { AppError, forbidden, notFound } from "@/lib/errors";
 import { decodeCursor, DEFAULT_PAGE, encodeCursor, timeIdCursor } from "@/lib/api/cursor";
+import { prefsFrom } from "@/lib/format";
 import {
   durationMs,
   MAX_PASS_DAYS,
@@ -36,8 +37,15 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** How long an ended pass stays, greyed, in the shop's list. */
 export const ENDED_VISIBLE_MS = 48 * 60 * 60 * 1000;
 
-function formatWhen(d: Date) {
-  return `${d.toLocaleString("en-GB", { timeZone: "UTC", weekday: "long", day: "numeric", month: "long", hour: "2-digit", minute: "2-digit" })} UTC`;
+/** A moment in an e-mail, in the driver's stored time zone, with the zone's name. */
+function formatWhen(d: Date, timeZone = "UTC") {
+  const { timeZone: zone } = prefsFrom({ timeZone });
+  return d.toLocaleString("en-GB", { timeZone: zone, weekday: "long", day: "numeric", month: "long", hour: "2-digit", minute: "2-digit", timeZoneName: "short" });
+}
+
+async function driverTimeZone(userId: string): Promise<string> {
+  const [p] = await db.select({ tz: driverProfile.timezone }).from(driverProfile).where(eq(driverProfile.userId, userId)).limit(1);
+  return p?.tz ?? "UTC";
 }
 
 async function passVehicles(passIds: string[]) {
@@ -296,7 +304,7 @@ export async function issuePass({ session, input, now }: IssuePassArgs) {
         driverName: s.user.name,
         vehicles: vehicles.map((v) => v.nickname),
         scopeLabel: SCOPE_LABEL[input.scope],
-        endsAtText: formatWhen(endsAt),
+        endsAtText: formatWhen(endsAt, await driverTimeZone(s.user.id)),
         note: input.note,
         passUrl: `${appUrl()}/shop/passes/${pass.id}`,
       }),

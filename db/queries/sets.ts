@@ -10,7 +10,7 @@ import { AppError, notFound } from "@/lib/errors";
 import { decodeDotCode, parseTireSize } from "@/lib/tires";
 import { removeStoredFile } from "@/lib/uploads";
 import { depthToMm } from "@/lib/units";
-import { odometerKmOf, SET_KIND_LABELS, todayIso, type SetPurchaseInput, type SetUpdateInput, type SwapInput } from "@/lib/validation/logbook";
+import { odometerKmOf, SET_KIND_LABELS, todayIso, type SetPurchaseInput, type SetUpdateInput, type SwapInput, type TireUpdateInput } from "@/lib/validation/logbook";
 import { assertVehicleAccess } from "./access";
 import { vehicleIdOfSet } from "./logbook";
 import { authorship, guardOdometer, requireOwner } from "./logbook-writes";
@@ -172,6 +172,43 @@ export async function updateSet({ access, setId, input }: { access: LogbookAcces
       })
       .where(and(eq(tireSet.id, setId), eq(tireSet.vehicleId, vehicleId)))
       .returning();
+    return row;
+  });
+}
+
+/**
+ * A tire's DOT code and position, corrected later. Moving a tire to a
+ * position another tire of the set holds swaps the two, as a rotation does.
+ */
+export async function updateTire({ access, tireId, input, today = todayIso() }: { access: LogbookAccess; tireId: string; input: TireUpdateInput; today?: string }) {
+  requireOwner(access, "change a tire");
+  if (!/^[0-9a-f-]{36}$/i.test(tireId)) throw notFound("That tire");
+  const [found] = await db.select({ setId: tire.setId }).from(tire).where(eq(tire.id, tireId)).limit(1);
+  if (!found) throw notFound("That tire");
+  const vehicleId = await vehicleIdOfSet({ setId: found.setId });
+  return db.transaction(async (tx) => {
+    await assertVehicleAccess(access, { vehicleId, write: true, action: "update_set" }, tx);
+    const [current] = await tx.select().from(tire).where(eq(tire.id, tireId)).limit(1);
+    if (!current) throw notFound("That tire");
+    if (input.position !== current.position) {
+      await tx
+        .update(tire)
+        .set({ position: current.position })
+        .where(and(eq(tire.setId, current.setId), eq(tire.position, input.position), ne(tire.id, tireId)));
+    }
+    const d = input.dotCode ? decodeDotCode(input.dotCode, { today }) : null;
+    const [row] = await tx
+      .update(tire)
+      .set({
+        position: input.position,
+        dotCode: input.dotCode ?? null,
+        dotWeek: d?.ok ? d.week : null,
+        dotYear: d?.ok ? d.year : null,
+        dotWeekStart: d?.ok ? d.weekStart : null,
+        dotPrecision: d?.ok ? d.precision : null,
+      })
+      .where(and(eq(tire.id, tireId), eq(tire.setId, current.setId)))
+      .returning({ id: tire.id, position: tire.position, dotCode: tire.dotCode });
     return row;
   });
 }

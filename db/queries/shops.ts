@@ -3,7 +3,7 @@ import "server-only";
 // profile and staff, invitations, and the directory drivers choose from.
 // Owner-only actions check the role here, on the server, every time.
 import { randomUUID } from "node:crypto";
-import { and, asc, eq, ilike, ne, or } from "drizzle-orm";
+import { and, asc, eq, ilike, isNull, ne, or } from "drizzle-orm";
 import { db } from "@/db";
 import { invitation, member, organization, shopProfile, user } from "@/db/schema";
 import { requireSession, requireShopMember } from "@/lib/auth/roles";
@@ -206,4 +206,19 @@ export async function searchShops({ q, limit = 30 }: { q: string; limit?: number
     .where(term ? or(ilike(organization.name, `%${term}%`), ilike(shopProfile.town, `%${term}%`)) : undefined)
     .orderBy(asc(shopProfile.town), asc(organization.name))
     .limit(limit);
+}
+
+/**
+ * The shops whose staff this account joined (an accepted invitation to its
+ * e-mail) and has since left or been removed from: the shop workspace says so
+ * instead of a bare "not for this account".
+ */
+export async function formerShopsOf({ userId, email }: { userId: string; email: string }): Promise<string[]> {
+  const rows = await db
+    .selectDistinct({ name: organization.name })
+    .from(invitation)
+    .innerJoin(organization, eq(organization.id, invitation.organizationId))
+    .leftJoin(member, and(eq(member.organizationId, invitation.organizationId), eq(member.userId, userId)))
+    .where(and(eq(invitation.email, email.toLowerCase()), eq(invitation.status, "accepted"), isNull(member.id)));
+  return rows.map((r) => r.name);
 }

@@ -39,11 +39,3 @@ export function isValidTimeZone(timeZone: string): boolean {
     return false;
   }
 }
-
-/** "Sun 15 Nov 2026", spelled out without the runtime's locale data. */
-export function formatDay(iso: string): string {
-  const d = new Date(`${iso}T00:00:00Z`);
-  const days = ["Sun", "Mon", "Tue", "Wed", "Thu", "Fri", "Sat"];
-  const months = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
-  return `${days[d.getUTCDay()]} ${d.getUTCDate()} ${months[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
-}

@@ -21,7 +21,8 @@ import { oneClickUnsubscribeUrl, unsubscribeUrl } from "@/lib/email/unsubscribe"
 import { appUrl } from "@/lib/env";
 import { planAllows } from "@/lib/plan";
 import { addDays, CAUTION, type ReminderItem } from "@/lib/tires";
-import { formatDay, logbookPath, todayIn, whatToDo } from "./describe";
+import { formatter, prefsFrom } from "@/lib/format";
+import { logbookPath, todayIn, whatToDo } from "./describe";
 
 export type RunOptions = {
   now?: Date;
@@ -74,7 +75,7 @@ export async function runReminderDeliveries({ now = new Date(), send = sendEmail
         // A retry of the same claimed rows carries the same key, so a message the
         // provider accepted just before a crash is not delivered twice.
         const idempotencyKey = `reminder-digest/${createHash("sha256").update([...ids].sort().join(",")).digest("hex")}`;
-        result = await send({ ...digestEmail({ to: profile.email, name: profile.name, userId, items: toSend.map((t) => t.item) }), idempotencyKey });
+        result = await send({ ...digestEmail({ to: profile.email, name: profile.name, userId, items: toSend.map((t) => t.item), timeZone: profile.timezone }), idempotencyKey });
       } catch (err) {
         // Unknown whether it went out: keep the claim; the retry window decides.
         await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "failed", error: String(err), retryNow: false } });
@@ -97,7 +98,9 @@ export async function runReminderDeliveries({ now = new Date(), send = sendEmail
   return summary;
 }
 
-function digestEmail({ to, name, userId, items }: { to: string; name: string; userId: string; items: ReminderItem[] }): SendEmailInput {
+function digestEmail({ to, name, userId, items, timeZone }: { to: string; name: string; userId: string; items: ReminderItem[]; timeZone: string }): SendEmailInput {
+  // Calendar dates, written as the driver reads them; the driver's stored zone decided which day is "today".
+  const { day } = formatter(prefsFrom({ timeZone }));
   const base = appUrl();
   const sorted = [...items].sort((a, b) => a.date.localeCompare(b.date));
   const subject = sorted.length === 1 ? `Tire reminder: ${sorted[0].subject}` : `${sorted.length} tire reminders, first: ${sorted[0].subject}`;
@@ -113,7 +116,7 @@ function digestEmail({ to, name, userId, items }: { to: string; name: string; us
       caution: CAUTION,
       items: sorted.map((i) => ({
         subject: i.subject,
-        dateLabel: formatDay(i.date),
+        dateLabel: day(i.date),
         severityLabel: conditionLabelFor(i.severity),
         condition: badgeFor(i.severity),
         overdue: i.overdue,

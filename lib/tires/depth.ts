@@ -353,3 +353,34 @@ export function depthCondition(input: {
 function fmt(n: number): string {
   return String(Math.round(n * 10) / 10);
 }
+
+/**
+ * Tread does not grow back [practice]. A reading deeper than the tire was new,
+ * or clearly deeper than its previous reading, is most likely a typo, a
+ * reading of the wrong tire, or a gauge pushed into a sipe; the driver is
+ * asked before it is saved. The slack allows for gauge tolerance: about
+ * ±0.5 mm for a simple probe gauge [practice]; a later reading may read 1 mm
+ * deeper than the last one through gauge and groove differences [practice].
+ */
+export const DEEPER_THAN_NEW_SLACK_MM = 0.5;
+export const DEEPER_THAN_LAST_SLACK_MM = 1.0;
+
+export function unusualDepth(input: {
+  /** Deepest groove of this reading. */
+  deepestMm: number;
+  /** The tire's depth when new, if logged. */
+  newDepthMm?: number | null;
+  /** The previous reading's depth (shallowest groove), if any. */
+  previousMm?: number | null;
+  /** This reading's depth (shallowest groove). */
+  depthMm: number;
+}): { reason: "deeper-than-new" | "jump-up"; message: string } | null {
+  const { deepestMm, newDepthMm, previousMm, depthMm } = input;
+  if (newDepthMm != null && deepestMm > newDepthMm + DEEPER_THAN_NEW_SLACK_MM) {
+    return { reason: "deeper-than-new", message: `deeper than the tire was new (${newDepthMm} mm)` };
+  }
+  if (previousMm != null && depthMm > previousMm + DEEPER_THAN_LAST_SLACK_MM) {
+    return { reason: "jump-up", message: `more than ${DEEPER_THAN_LAST_SLACK_MM} mm deeper than the last reading (${previousMm} mm)` };
+  }
+  return null;
+}

@@ -53,6 +53,9 @@ export {
   DEPTH_WATCH_MARGIN_MM,
   JURISDICTIONS,
   MM_PER_THIRTY_SECOND,
+  unusualDepth,
+  DEEPER_THAN_NEW_SLACK_MM,
+  DEEPER_THAN_LAST_SLACK_MM,
   type DepthLimitOk,
   type DepthLimitRow,
   type Grooves,
@@ -74,6 +77,7 @@ export {
 } from "./wear";
 export {
   wearPattern,
+  patternAdvice,
   axlePattern,
   AXLE_DIFFERENCE_THRESHOLD_MM,
   UNEVEN_WEAR_THRESHOLD_MM,

@@ -137,3 +137,21 @@ export function axlePattern(
   }
   return { ok: true, frontAverageMm, rearAverageMm, differenceMm, rotate, tires, advice, source: PATTERN_SOURCE, caution: CAUTION };
 }
+
+/**
+ * The advice shown beside a tire's wear shape, never contradicting its
+ * condition: "nothing to do" is only said of a tire that needs nothing.
+ * `level` is the tire's overall condition (age and depth); "unknown" means
+ * its age could not be read.
+ */
+export function patternAdvice(kind: WearPatternKind, level: "good" | "unknown" | "watch" | "plan" | "replace"): string {
+  const shape = kind === "even" ? null : ADVICE[kind].advice;
+  if (level === "replace") {
+    return shape
+      ? `Replace this tire now, and before the new one goes on: ${shape.charAt(0).toLowerCase()}${shape.slice(1)}`
+      : "Replace this tire now; its wear is even, so the cause is distance or age, not a fault.";
+  }
+  if (level === "plan") return shape ? `Plan new tires soon. ${shape}` : "Plan new tires soon; the wear is even.";
+  if (level === "unknown") return shape ?? "Read the DOT code on the sidewall and add it: the age decides too.";
+  return shape ?? ADVICE.even.advice;
+}

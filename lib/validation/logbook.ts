@@ -219,6 +219,19 @@ export const setUpdateSchema = z.object({
 });
 export type SetUpdateInput = z.output<typeof setUpdateSchema>;
 
+/** Correcting one tire: its DOT code (read later from the sidewall) and its position. */
+export const tireUpdateSchema = z
+  .object({
+    dotCode: optText(20),
+    position: z.enum(POSITIONS, { error: "Choose the tire's position." }),
+  })
+  .superRefine((v, ctx) => {
+    if (!v.dotCode) return;
+    const d = decodeDotCode(v.dotCode, { today: todayIso() });
+    if (!d.ok) ctx.addIssue({ code: "custom", path: ["dotCode"], message: d.error });
+  });
+export type TireUpdateInput = z.output<typeof tireUpdateSchema>;
+
 export const swapSchema = z.object({
   /** The set that goes on the car. */
   setId: id,
@@ -248,6 +261,8 @@ const treadCheckObject = z.object({
   odometer: optNumber(0, 3_000_000, "The odometer"),
   odometerUnit: distanceUnit,
   confirmLowerOdometer: bool.default(false),
+  /** The driver confirmed a reading deeper than new or than the last one. */
+  confirmUnusualDepth: bool.default(false),
   method: z.enum(["gauge", "coin"]).default("gauge"),
   depthUnit,
   pressureUnit,

@@ -115,13 +115,14 @@ test("the owner invites a technician, who joins once through the e-mailed link, 
 
   await page.goto(path);
   await expect(page.getByText(`The invitation is for ${email}.`)).toBeVisible();
-  await page.goto("/sign-up");
+  // "Create an account" comes back to the invitation once the account exists.
+  await page.getByRole("link", { name: "Create an account" }).click();
+  await expect(page).toHaveURL(/\/sign-up\?next=/);
   await page.getByLabel("Your name").fill("Perrin Dunmore");
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill("a-long-enough-password");
   await page.getByRole("button", { name: "Create my logbook" }).click();
-  await expect(page).toHaveURL(/\/vehicles$/);
-  await page.goto(path);
+  await expect(page).toHaveURL(new RegExp(`${path}$`));
   await page.getByRole("button", { name: "Join Quillby Tread Works" }).click();
   await expect(page).toHaveURL(/\/shop$/);
   await expect(page.getByRole("heading", { name: "Passes at Quillby Tread Works" })).toBeVisible();
@@ -133,10 +134,17 @@ test("the owner invites a technician, who joins once through the e-mailed link, 
   await session.signInAndLand(demoAccounts.wren.email, "/shop");
   await page.goto("/shop/profile");
   await page.getByRole("button", { name: "Remove Perrin" }).click();
+  // Removing someone asks first; keeping them changes nothing.
+  await page.getByRole("alertdialog").getByRole("button", { name: "Keep it" }).click();
+  await expect(page.getByText("Perrin Dunmore is no longer on the staff.")).toHaveCount(0);
+  await page.getByRole("button", { name: "Remove Perrin" }).click();
+  await expect(page.getByRole("alertdialog")).toContainText("can no longer open the shop's passes");
+  await page.getByRole("alertdialog").getByRole("button", { name: "Remove Perrin" }).click();
   await expect(page.getByText("Perrin Dunmore is no longer on the staff.")).toBeVisible();
   await session.signOut();
   // No shop any more: the account lands on its own vehicles page, and the workspace is closed to it.
   await session.signInAndLand(email, "/vehicles", "a-long-enough-password");
   await page.goto("/shop");
-  await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "You are no longer on the staff" })).toBeVisible();
+  await expect(page.getByText("Quillby Tread Works removed this account from its staff")).toBeVisible();
 });

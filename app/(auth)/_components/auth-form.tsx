@@ -1,4 +1,5 @@
 "use client";
+import { linkClass } from "@/components/logbook/format";
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
@@ -81,8 +82,8 @@ export function SignInForm() {
         Sign in
       </Button>
       <div className="flex justify-between text-sm">
-        <Link href="/forgot-password" className="text-groove-800">Forgot your password?</Link>
-        <Link href="/sign-up" className="text-groove-800">Create an account</Link>
+        <Link href="/forgot-password" className={linkClass}>Forgot your password?</Link>
+        <Link href={next === "/start" ? "/sign-up" : `/sign-up?next=${encodeURIComponent(next)}`} className={linkClass}>Create an account</Link>
       </div>
     </form>
   );
@@ -90,6 +91,9 @@ export function SignInForm() {
 
 export function SignUpForm() {
   const router = useRouter();
+  // An invitation (or any page) that sent the visitor here gets them back after sign-up.
+  const next = useSafeNext();
+  const back = next === "/start" ? null : next;
   const [error, setError] = useState<string | null>(null);
   const form = useForm<z.infer<typeof signUpSchema>>({ resolver: zodResolver(signUpSchema) });
   return (
@@ -107,7 +111,7 @@ export function SignUpForm() {
           );
           return;
         }
-        router.push("/vehicles");
+        router.push(back ?? "/vehicles");
         router.refresh();
       })}
     >
@@ -124,7 +128,10 @@ export function SignUpForm() {
         Create my logbook
       </Button>
       <p className="text-sm">
-        Already have an account? <Link href="/sign-in" className="text-groove-800">Sign in</Link>
+        Already have an account?{" "}
+        <Link href={back ? `/sign-in?next=${encodeURIComponent(back)}` : "/sign-in"} className={linkClass}>
+          Sign in
+        </Link>
       </p>
     </form>
   );
@@ -161,12 +168,16 @@ export function ResetPasswordForm() {
   const router = useRouter();
   const params = useSearchParams();
   const token = params.get("token");
-  const [error, setError] = useState<string | null>(params.get("error") ? "This reset link has expired or was already used. Ask for a new one." : null);
+  const [expired, setExpired] = useState(!!params.get("error"));
   const form = useForm<z.infer<typeof resetPasswordSchema>>({ resolver: zodResolver(resetPasswordSchema) });
   if (!token)
     return (
       <Alert tone="error">
-        This reset link is incomplete or has expired. <Link href="/forgot-password">Ask for a new one.</Link>
+        This reset link is incomplete or has expired.{" "}
+        <Link href="/forgot-password" className={linkClass}>
+          Send me a new link
+        </Link>
+        .
       </Alert>
     );
   return (
@@ -174,16 +185,24 @@ export function ResetPasswordForm() {
       noValidate
       className="space-y-4"
       onSubmit={form.handleSubmit(async ({ password }) => {
-        setError(null);
+        setExpired(false);
         const { error } = await authClient.resetPassword({ newPassword: password, token });
         if (error) {
-          setError("This reset link has expired or was already used. Ask for a new one.");
+          setExpired(true);
           return;
         }
         router.push("/sign-in?reset=1");
       })}
     >
-      {error ? <Alert tone="error">{error}</Alert> : null}
+      {expired ? (
+        <Alert tone="error">
+          This reset link has expired or was already used.{" "}
+          <Link href="/forgot-password" className={linkClass}>
+            Send me a new link
+          </Link>
+          .
+        </Alert>
+      ) : null}
       <FormFields
         form={form}
         fields={[

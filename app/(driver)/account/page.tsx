@@ -1,4 +1,5 @@
 import Link from "next/link";
+import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { AccountData } from "@/components/account/account-data";
 import { UnitsForm } from "@/components/logbook/units-form";
@@ -8,6 +9,8 @@ import { planOf } from "@/db/queries/billing";
 import { driverPrefs } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
 import { saveUnits } from "./actions";
+
+export const metadata: Metadata = { title: "Account" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,8 +1,11 @@
+import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { PurchaseForm } from "@/components/logbook/purchase-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { driverPrefs, listVehicleChoices } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Log a purchase" };
 
 export const dynamic = "force-dynamic";
 

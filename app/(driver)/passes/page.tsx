@@ -1,5 +1,7 @@
+import type { Metadata } from "next";
 import Link from "next/link";
-import { AccessLogTable, formatAt } from "@/components/passes/access-log-table";
+import { viewerFormat } from "@/lib/format/server";
+import { AccessLogTable } from "@/components/passes/access-log-table";
 import { IssuePassForm } from "@/components/passes/issue-pass-form";
 import { PassActions } from "@/components/passes/pass-actions";
 import { PassStateBadge } from "@/components/passes/pass-state-badge";
@@ -14,9 +16,12 @@ import { getSession } from "@/lib/auth/session";
 import { cn } from "@/lib/cn";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
 
+export const metadata: Metadata = { title: "Shop passes" };
+
 export const dynamic = "force-dynamic";
 
 export default async function DriverPassesPage() {
+  const f = await viewerFormat();
   const session = requireSession(await getSession());
   const now = new Date();
   const [vehicles, passes, log] = await Promise.all([
@@ -67,7 +72,7 @@ export default async function DriverPassesPage() {
                   </p>
                   <p className="flex flex-wrap items-center gap-x-3 text-sm text-asphalt-700">
                     <TimeLeft endsAt={p.endsAt.toISOString()} serverNow={now.toISOString()} refreshOnEnd />
-                    <span>Ends {formatAt(p.endsAt)}</span>
+                    <span>Ends {f.dateTime(p.endsAt)}</span>
                   </p>
                   {p.note ? <p className="text-sm text-asphalt-600">Your note: “{p.note}”</p> : null}
                   <PassActions passId={p.id} shopName={p.shopName} />
@@ -104,7 +109,7 @@ export default async function DriverPassesPage() {
                 </span>
                 <span className="flex items-center gap-2 text-sm">
                   <PassStateBadge state={p.state} />
-                  {formatAt(p.revokedAt && p.revokedAt < p.endsAt ? p.revokedAt : p.endsAt)}
+                  {f.dateTime(p.revokedAt && p.revokedAt < p.endsAt ? p.revokedAt : p.endsAt)}
                 </span>
               </li>
             ))}

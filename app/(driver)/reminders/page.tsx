@@ -14,7 +14,7 @@ import { PLUS_ADDS } from "@/lib/plan";
 import { todayIn } from "@/lib/reminders/describe";
 
 export const dynamic = "force-dynamic";
-export const metadata = { title: "Reminders · Fourpatch" };
+export const metadata = { title: "Reminders" };
 
 function timeZones(current: string): string[] {
   const all = typeof Intl.supportedValuesOf === "function" ? Intl.supportedValuesOf("timeZone") : [];

@@ -1,7 +1,9 @@
+import type { Metadata } from "next";
 import { CalendarClock, Gauge, Plus, Warehouse } from "lucide-react";
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { formatDate, linkClass, setTitle } from "@/components/logbook/format";
+import { linkClass, setTitle } from "@/components/logbook/format";
+import { viewerFormat } from "@/lib/format/server";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { Card } from "@/components/ui/card";
 import { ConditionBadge } from "@/components/ui/condition-badge";
@@ -9,13 +11,16 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { listVehicleSummaries } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
-import { depthUnitFor, distanceUnitFor, formatDistance } from "@/lib/units";
+import { depthUnitFor, distanceUnitFor } from "@/lib/units";
 import { SetAtAGlance } from "@/components/visual/set-at-a-glance";
 import { todayIso } from "@/lib/validation/logbook";
+
+export const metadata: Metadata = { title: "Vehicles" };
 
 export const dynamic = "force-dynamic";
 
 export default async function VehiclesOverviewPage() {
+  const f = await viewerFormat();
   const session = await getSession();
   if (!session) redirect("/sign-in?next=/vehicles");
   const { vehicles, prefs } = await listVehicleSummaries({ userId: session.user.id, today: todayIso() });
@@ -63,43 +68,44 @@ export default async function VehiclesOverviewPage() {
                 {v.mountedSet ? <SetAtAGlance tires={v.mountedSet.tires} limitMm={v.mountedSet.limitMm} depthUnit={depthUnit} /> : null}
                 <dl className="space-y-2 text-sm">
                   <div className="flex gap-2">
-                    <dt className="sr-only">On the car</dt>
                     <Gauge aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    {/* The term is shown once, visibly: no second, hidden copy for screen readers. */}
+                    <dt className="shrink-0 text-asphalt-600">On the car:</dt>
                     <dd>
                       {v.mountedSet ? (
                         <>
-                          On the car: <Link href={`/sets/${v.mountedSet.id}`} className={linkClass}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
+                          <Link href={`/sets/${v.mountedSet.id}`} className={linkClass}>{setTitle(v.mountedSet)}</Link> ({v.mountedSet.size})
                         </>
                       ) : (
-                        <>No set on the car in the logbook.</>
+                        <>no set in the logbook.</>
                       )}
                     </dd>
                   </div>
                   <div className="flex gap-2">
-                    <dt className="sr-only">Next reminder</dt>
                     <CalendarClock aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    <dt className="shrink-0 text-asphalt-600">Next:</dt>
                     <dd>
                       {v.nextReminder ? (
                         <>
-                          Next: <strong>{formatDate(v.nextReminder.date)}</strong> — {v.nextReminder.subject}
+                          <strong>{f.date(v.nextReminder.date)}</strong> — {v.nextReminder.subject}
                           {v.nextReminder.overdue ? <span className="font-semibold text-condition-replace"> (overdue)</span> : null}
                         </>
                       ) : (
-                        "No reminder yet: log the tires' DOT codes and a tread check."
+                        "no reminder yet: log the tires' DOT codes and a tread check."
                       )}
                     </dd>
                   </div>
                   <div className="flex gap-2">
-                    <dt className="sr-only">Last tread check</dt>
                     <Gauge aria-hidden className="mt-0.5 size-4 shrink-0 text-asphalt-500" />
+                    <dt className="shrink-0 text-asphalt-600">Last check:</dt>
                     <dd>
                       {v.lastCheck ? (
                         <>
-                          Last check {formatDate(v.lastCheck.date)}
-                          {v.lastCheck.odometerKm != null ? ` at ${formatDistance(v.lastCheck.odometerKm, unit)}` : ""}
+                          {f.date(v.lastCheck.date)}
+                          {v.lastCheck.odometerKm != null ? ` at ${f.distance(v.lastCheck.odometerKm, unit)}` : ""}
                         </>
                       ) : (
-                        "No tread check yet."
+                        "none yet."
                       )}
                     </dd>
                   </div>

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { BuyPlus } from "@/components/billing/buy-plus";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { getSession } from "@/lib/auth/session";
+import { PLUS_ADDS } from "@/lib/plan";
 
 export const metadata: Metadata = { title: "Pricing" };
 
@@ -12,13 +13,14 @@ const plans = [
     name: "Free",
     price: "€0",
     blurb: "The whole logbook, for as long as you drive.",
-    items: ["Vehicles, sets, date codes and tread checks", "Wear charts and limit projections", "Shop passes with an access log", "A calendar feed of age and depth dates", "Export and delete everything"],
+    items: ["Every vehicle you drive, with its sets, date codes and tread checks", "Wear charts and limit projections", "Shop passes with an access log", "A calendar feed of age and depth dates", "Export and delete everything"],
   },
   {
     name: "Plus",
     price: "€2.50 / month",
     blurb: "For a household that wants reminders to come to it.",
-    items: ["Everything in Free", "E-mail reminders, each sent once", "Calendar alarms with your lead times", "Seasonal swap and rotation reminders", "More vehicles per household"],
+    // Only what the product gates on the plan (lib/plan.ts): no promise the product does not keep.
+    items: ["Everything in Free", ...PLUS_ADDS],
   },
 ];
 

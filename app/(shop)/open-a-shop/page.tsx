@@ -1,9 +1,12 @@
+import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { CreateShopForm } from "@/components/shops/shop-profile-form";
 import { AppShell } from "@/components/shell/app-shell";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { getSession } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Open a shop" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,6 +1,7 @@
+import type { Metadata } from "next";
 import { ChevronRight } from "lucide-react";
+import { viewerFormat } from "@/lib/format/server";
 import Link from "next/link";
-import { formatAt } from "@/components/passes/access-log-table";
 import { PassStateBadge } from "@/components/passes/pass-state-badge";
 import { TimeLeft } from "@/components/passes/time-left";
 import { Card } from "@/components/ui/card";
@@ -12,12 +13,15 @@ import { cn } from "@/lib/cn";
 import { SERVICE_KIND_LABELS } from "@/lib/validation/logbook";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
 
+export const metadata: Metadata = { title: "Passes at the shop" };
+
 export const dynamic = "force-dynamic";
 
 /** Passes on one page; a busy shop pages on with "More passes". */
 const PASSES_PER_PAGE = 40;
 
 export default async function ShopHomePage({ searchParams }: { searchParams: Promise<{ after?: string }> }) {
+  const f = await viewerFormat();
   const session = requireSession(await getSession());
   const now = new Date();
   const { after } = await searchParams;
@@ -80,7 +84,7 @@ export default async function ShopHomePage({ searchParams }: { searchParams: Pro
                   {p.vehicles.map((v) => v.nickname).join(", ")} · {p.driverName}
                 </span>
                 <span className="flex items-center gap-2 text-sm">
-                  <PassStateBadge state={p.state} /> {formatAt(p.endedAt)}
+                  <PassStateBadge state={p.state} /> {f.dateTime(p.endedAt)}
                 </span>
               </li>
             ))}

@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { Brand } from "@/components/shell/brand";
 import { AcceptInvitation } from "@/components/shops/accept-invitation";
@@ -5,6 +6,8 @@ import { Alert } from "@/components/ui/alert";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { getInvitation } from "@/db/queries/shops";
 import { getSession } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Join a shop" };
 
 export const dynamic = "force-dynamic";
 
@@ -37,7 +40,7 @@ export default async function JoinPage({ params }: { params: Promise<{ invitatio
         <Link href={`/sign-in?next=${encodeURIComponent(here)}`} className={buttonVariants({ size: "lg", className: "w-full" })}>
           Sign in to accept
         </Link>
-        <Link href="/sign-up" className={buttonVariants({ variant: "secondary", className: "w-full" })}>
+        <Link href={`/sign-up?next=${encodeURIComponent(here)}`} className={buttonVariants({ variant: "secondary", className: "w-full" })}>
           Create an account
         </Link>
       </div>

@@ -7,7 +7,7 @@ import { KIND_LABELS, verifyUnsubscribe } from "@/lib/email/unsubscribe";
 import { UnsubscribeForm } from "./unsubscribe-form";
 
 export const dynamic = "force-dynamic";
-export const metadata = { title: "E-mail choices · Fourpatch", robots: { index: false } };
+export const metadata = { title: "E-mail choices", robots: { index: false } };
 
 export default async function UnsubscribePage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;

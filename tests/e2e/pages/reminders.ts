@@ -27,7 +27,15 @@ export class RemindersPage {
 
   /** Makes a feed link and returns both addresses as the page shows them. */
   async makeFeedLink(): Promise<{ https: string; webcal: string }> {
-    await this.page.getByRole("button", { name: /Make my calendar link|Make a new feed link|Make another link/ }).click();
+    const button = this.page.getByRole("button", { name: /Make my calendar link|Make a new feed link|Make another link/ });
+    const replacing = (await button.textContent())?.includes("Make my calendar link") === false;
+    await button.click();
+    // Replacing a link breaks the calendars subscribed to it: the page asks first.
+    if (replacing) {
+      const dialog = this.page.getByRole("alertdialog");
+      await expect(dialog).toContainText("stops working at once");
+      await dialog.getByRole("button", { name: "Make a new link" }).click();
+    }
     await expect(this.page.getByText("Your feed link is ready")).toBeVisible();
     const https = await this.page.getByLabel(/Feed address \(https\)/).inputValue();
     const webcal = await this.page.getByLabel(/Subscribe address \(webcal\)/).inputValue();

@@ -281,7 +281,7 @@ describe("tread checks", () => {
     const body = { setId, odometer: "30000", readings: [{ tireId: tires[0].id, centre: "7" }] };
     const res = await post(vehicleId, body, ada);
     expect(res.status).toBe(409);
-    expect((await json(res)).error!.fields!.odometer[0]).toMatch(/lower than the last one \(41\u202f000 km/);
+    expect((await json(res)).error!.fields!.odometer[0]).toMatch(/lower than the last one \(41,000 km/);
     expect((await post(vehicleId, { ...body, confirmLowerOdometer: true }, ada)).status).toBe(201);
   });
 

@@ -3,9 +3,6 @@ import { coinDepth, coinLabel, COIN_RESULTS, depthCondition, thirtySecondsToMm }
 import {
   depthToMm,
   distanceToKm,
-  formatDepth,
-  formatDistance,
-  formatPressure,
   kmToDistance,
   kpaToPressure,
   mmToDepth,
@@ -33,16 +30,6 @@ describe("units", () => {
     expect(kpaToPressure(230, "kpa")).toBe(230);
   });
 
-  it("formats the same text on any server locale", () => {
-    expect(formatDistance(73_740, "km")).toBe("73\u202f740 km");
-    expect(formatDistance(160.9344, "mi")).toBe("100 mi");
-    expect(formatDistance(null, "km")).toBe("—");
-    expect(formatDepth(6.35, "32nds")).toBe("8/32 in");
-    expect(formatDepth(3.26, "mm")).toBe("3.3 mm");
-    expect(formatPressure(240, "bar")).toBe("2.4 bar");
-    expect(formatPressure(241.3165, "psi")).toBe("35 psi");
-    expect(formatPressure(229.6, "kpa")).toBe("230 kPa");
-  });
 });
 
 describe("the coin method [practice, trade-facts §2]", () => {

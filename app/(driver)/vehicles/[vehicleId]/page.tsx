@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { orNotFound } from "@/components/logbook/or-not-found";
 import { VehicleLogbookView } from "@/components/logbook/vehicle-logbook";
@@ -5,6 +6,8 @@ import { getVehicleLogbook } from "@/db/queries/logbook";
 import { ownerAccess } from "@/lib/auth/logbook-access";
 import { getSession } from "@/lib/auth/session";
 import { todayIso } from "@/lib/validation/logbook";
+
+export const metadata: Metadata = { title: "A vehicle's logbook" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,8 +1,11 @@
+import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { VehicleForm } from "@/components/logbook/vehicle-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { driverPrefs } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Add a vehicle" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { EditShopForm } from "@/components/shops/shop-profile-form";
 import { StaffManager } from "@/components/shops/staff-manager";
 import { Alert } from "@/components/ui/alert";
@@ -6,6 +7,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getShopForOwner } from "@/db/queries/shops";
 import { membershipsOf, requireSession } from "@/lib/auth/roles";
 import { getSession } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Shop and staff" };
 
 export const dynamic = "force-dynamic";
 

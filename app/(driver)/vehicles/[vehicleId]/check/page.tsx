@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { orNotFound } from "@/components/logbook/or-not-found";
 import { CheckForm } from "@/components/logbook/check-form";
@@ -7,6 +8,8 @@ import { ownerAccess } from "@/lib/auth/logbook-access";
 import { getSession } from "@/lib/auth/session";
 import { depthUnitFor } from "@/lib/units";
 import { todayIso } from "@/lib/validation/logbook";
+
+export const metadata: Metadata = { title: "Record a tread check" };
 
 export const dynamic = "force-dynamic";
 

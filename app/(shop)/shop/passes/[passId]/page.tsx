@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
@@ -6,6 +7,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { listShopPasses, resolvePassAccess } from "@/db/queries/passes";
 import { getSession } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
+
+export const metadata: Metadata = { title: "A shop pass" };
 
 export const dynamic = "force-dynamic";
 

@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import { Paperclip, PencilLine } from "lucide-react";
 import { notFound } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
@@ -12,9 +13,12 @@ import { getVehicleLogbook, type SetView } from "@/db/queries/logbook";
 import { resolvePassAccess } from "@/db/queries/passes";
 import { getSession } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { depthUnitFor, formatDistance } from "@/lib/units";
+import { depthUnitFor } from "@/lib/units";
+import { viewerFormat } from "@/lib/format/server";
 import { POSITION_LABELS, SERVICE_KIND_LABELS, SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
 import { SCOPE_LABEL } from "@/lib/validation/passes";
+
+export const metadata: Metadata = { title: "Logbook under a pass" };
 
 export const dynamic = "force-dynamic";
 
@@ -31,6 +35,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
   const session = await getSession();
   const now = new Date();
   const today = todayIso(now);
+  const f = await viewerFormat();
   let access, logbook;
   try {
     access = await resolvePassAccess({ session, passId, now });
@@ -56,7 +61,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
         <p className="text-lg text-asphalt-700">
           {[v.year, v.make, v.model].filter(Boolean).join(" ")}
           {v.plate ? ` · ${v.plate}` : ""}
-          {logbook.lastOdometer ? ` · ${formatDistance(logbook.lastOdometer.odometerKm, v.odometerUnit)} on ${logbook.lastOdometer.date}` : ""}
+          {logbook.lastOdometer ? ` · ${f.distance(logbook.lastOdometer.odometerKm, v.odometerUnit)} on ${f.date(logbook.lastOdometer.date)}` : ""}
         </p>
       </header>
 
@@ -114,7 +119,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
                 {s.condition ? <ConditionBadge condition={s.condition} /> : null}
               </div>
               <p className="text-sm text-asphalt-700">
-                {s.tires.map((t) => `${POSITION_LABELS[t.position]}: ${t.dotCode ?? "—"}${t.age ? ` (${t.age.years} y ${t.age.months} m)` : ""}`).join(" · ")}
+                {s.tires.map((t) => `${POSITION_LABELS[t.position]}: ${t.dotCode ?? "—"}${t.age ? ` (${f.age(t.age)})` : ""}`).join(" · ")}
               </p>
             </Card>
           ))}
@@ -131,8 +136,8 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
             {logbook.service.map((s) => (
               <li key={s.id} className="px-4 py-3">
                 <p className="font-semibold">
-                  {SERVICE_KIND_LABELS[s.kind]} · {s.performedOn}
-                  {s.odometerKm != null ? ` · ${formatDistance(s.odometerKm, v.odometerUnit)}` : ""}
+                  {SERVICE_KIND_LABELS[s.kind]} · {f.date(s.performedOn)}
+                  {s.odometerKm != null ? ` · ${f.distance(s.odometerKm, v.odometerUnit)}` : ""}
                 </p>
                 <p className="text-sm text-asphalt-600">{s.shopName ? `${s.shopName}${s.authorName ? `, ${s.authorName}` : ""}` : "Logged by the driver"}</p>
                 {s.notes ? <p className="text-sm text-asphalt-700">{s.notes}</p> : null}
@@ -147,7 +152,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
             {logbook.checks.slice(0, 12).map((c) => (
               <li key={c.id} className="px-4 py-3">
                 <p className="font-semibold">
-                  {c.checkedOn} · {c.readings.length} {c.readings.length === 1 ? "tire" : "tires"} · {c.method === "coin" ? "coin (approximate)" : "gauge"}
+                  {f.date(c.checkedOn)} · {f.count(c.readings.length, { one: "tire", other: "tires" })} · {c.method === "coin" ? "coin (approximate)" : "gauge"}
                 </p>
                 <p className="text-sm text-asphalt-600">{c.measuredBy === "shop" ? `${c.shopName ?? "A shop"}${c.authorName ? `, ${c.authorName}` : ""}` : "Measured by the driver"}</p>
               </li>

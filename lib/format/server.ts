@@ -1,0 +1,20 @@
+import "server-only";
+// The viewer's locale and time zone on the server: the zone from the cookie
+// the browser sets, the locale from Accept-Language; UTC and en-GB otherwise.
+import { cookies, headers } from "next/headers";
+import { formatter, localeFromAcceptLanguage, prefsFrom, TIME_ZONE_COOKIE, type FormatPrefs } from "./index";
+
+export async function viewerPrefs(): Promise<FormatPrefs> {
+  const [c, h] = await Promise.all([cookies(), headers()]);
+  let zone = c.get(TIME_ZONE_COOKIE)?.value ?? null;
+  try {
+    zone = zone ? decodeURIComponent(zone) : null;
+  } catch {
+    zone = null;
+  }
+  return prefsFrom({ locale: localeFromAcceptLanguage(h.get("accept-language")), timeZone: zone });
+}
+
+export async function viewerFormat() {
+  return formatter(await viewerPrefs());
+}
