@@ -102,6 +102,18 @@ export function migrateDb(): Promise<void> {
   return globalForDb.__fourpatchMigrated;
 }
 
+/**
+ * A consistent copy of the embedded database's data folder, as a gzipped tar
+ * (PGlite's own dump; `loadDataDir` reads it back). Null on PostgreSQL, where
+ * pg_dump is the tool.
+ */
+export async function dumpEmbeddedDatabase(): Promise<Blob | null> {
+  const c = client();
+  if (c.kind !== "pglite") return null;
+  await c.pglite.query("CHECKPOINT");
+  return c.pglite.dumpDataDir("gzip");
+}
+
 /** Closes the client and releases the data-folder lock. */
 export async function closeDb() {
   const c = globalForDb.__fourpatchDb;

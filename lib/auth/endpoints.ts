@@ -31,8 +31,10 @@ const RESET_PER_ADDRESS = { name: "reset-address", max: 3, windowMs: 60 * 60_000
 const json = (status: number, body: unknown, headers: Record<string, string> = {}) =>
   Response.json(body, { status, headers: { "cache-control": "no-store", ...headers } });
 
+// The app's error shape, with the library's top-level code and message beside
+// it so that the browser's auth client shows the message too.
 const errorJson = (e: AppError, headers?: Record<string, string>) =>
-  json(e.status, { error: { code: e.code, message: e.safeMessage, ...(e.fields ? { fields: e.fields } : {}) } }, headers);
+  json(e.status, { code: e.code.toUpperCase(), message: e.safeMessage, error: { code: e.code, message: e.safeMessage, ...(e.fields ? { fields: e.fields } : {}) } }, headers);
 
 /**
  * Wraps better-auth's Next.js handler: refuses endpoints the product does

@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { COIN_RESULTS, decodeDotCode, isIsoDate, parseTireSize, validateVin, type CoinResult } from "@/lib/tires";
 import { depthToMm, distanceToKm, pressureToKpa, type DepthUnit, type PressureUnit } from "@/lib/units";
-import { decimalFromText } from "./text";
+import { decimalFromText, isSingleLine } from "./text";
 
 const blank = (v: unknown) => (v === "" || v === null || (typeof v === "string" && v.trim() === "") ? undefined : v);
 
@@ -101,7 +101,7 @@ const optSize = z.preprocess(
 
 export const vehicleSchema = z
   .object({
-    nickname: z.string({ error: "Give the vehicle a name you will recognise." }).trim().min(1, "Give the vehicle a name you will recognise.").max(60, "Use at most 60 characters."),
+    nickname: z.string({ error: "Give the vehicle a name you will recognise." }).trim().min(1, "Give the vehicle a name you will recognise.").max(60, "Use at most 60 characters.").refine(isSingleLine, "Keep the name on one line."),
     make: z.string({ error: "Type the make." }).trim().min(1, "Type the make.").max(60, "Use at most 60 characters."),
     model: z.string({ error: "Type the model." }).trim().min(1, "Type the model.").max(60, "Use at most 60 characters."),
     year: optNumber(1950, new Date().getFullYear() + 1, "The year"),

@@ -8,6 +8,8 @@ const HOSTILE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F\uFFFE\uFFF
 /** Single-line text (names, e-mail subjects) also refuses line and paragraph breaks. */
 const BREAKS = /[\r\n\u2028\u2029\u0085]/;
 
+const MAX_TEXT_DEPTH = 32;
+
 export const HOSTILE_TEXT_MESSAGE = "Remove the control characters from this field.";
 
 export function hasHostileText(s: string): boolean {
@@ -20,6 +22,8 @@ export function isSingleLine(s: string): boolean {
 
 /** The first path (a.b.0.c) in a JSON value whose key or string holds hostile characters, or null. */
 export function findHostileText(value: unknown, path: string[] = []): string | null {
+  // Nesting past any form's shape is refused as such (and never recursed into).
+  if (path.length > MAX_TEXT_DEPTH) return "_form";
   if (typeof value === "string") return hasHostileText(value) ? path.join(".") || "_form" : null;
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {

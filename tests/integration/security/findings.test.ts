@@ -272,8 +272,34 @@ describe("finding 8: hostile text is a 4xx naming the field, never a 5xx", () =>
     expect((await res.json()).error.fields).toHaveProperty("name");
   });
 
+  it("a shop name with a line break is refused too (it reaches e-mail subjects)", async () => {
+    const res = await shopPatch(request(`/api/shops/${shopId}`, { as: owner, method: "PATCH", body: { name: "Harrowgate\nBcc: x", town: "Testford" } }), ctx({ shopId }));
+    expect(res.status).toBe(422);
+    expect((await res.json()).error.fields).toHaveProperty("name");
+  });
+
   it("the shop profile route checks the owner role before it judges the body", async () => {
     const res = await shopPatch(request(`/api/shops/${shopId}`, { as: tech, method: "PATCH", body: { name: "" } }), ctx({ shopId }));
     expect(res.status).toBe(403);
+  });
+});
+
+describe("finding 10: the data-folder lock does not travel with a copied app folder", () => {
+  it("lives outside the app and data folders, named after the folder's real path", async () => {
+    const { lockPathFor } = await import("@/db/lock");
+    const fs = await import("node:fs");
+    const os = await import("node:os");
+    const path = await import("node:path");
+    const app = fs.mkdtempSync(path.join(os.tmpdir(), "fourpatch-app-"));
+    const copy = `${app}-copy`;
+    fs.mkdirSync(path.join(app, "data"));
+    fs.mkdirSync(path.join(copy, "data"), { recursive: true });
+    const lock = lockPathFor(path.join(app, "data"));
+    expect(lock.startsWith(app + path.sep)).toBe(false);
+    expect(lockPathFor(path.join(copy, "data"))).not.toBe(lock);
+    fs.symlinkSync(path.join(app, "data"), path.join(copy, "link"));
+    expect(lockPathFor(path.join(copy, "link"))).toBe(lock);
+    fs.rmSync(app, { recursive: true, force: true });
+    fs.rmSync(copy, { recursive: true, force: true });
   });
 });

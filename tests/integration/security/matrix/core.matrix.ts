@@ -7,6 +7,7 @@ import * as attachmentRoute from "@/app/api/attachments/[attachmentId]/route";
 import * as authRoute from "@/app/api/auth/[...all]/route";
 import * as checkRoute from "@/app/api/checks/[checkId]/route";
 import * as cronRoute from "@/app/api/cron/reminders/route";
+import * as backupRoute from "@/app/api/ops/backup/route";
 import * as fakeResendRoute from "@/app/api/fake/resend/emails/route";
 import * as feedTokenRoute from "@/app/api/feed/[token]/route";
 import * as passAttachmentRoute from "@/app/api/passes/[passId]/attachments/[attachmentId]/route";
@@ -223,6 +224,8 @@ export const entries: MatrixEntry[] = [
     call: (w, a) => status(h(cronRoute.GET)(w.req("/api/cron/reminders", a), ctx({}))) },
   { file: "app/api/cron/reminders/route.ts", exportName: "POST", what: "run the jobs without the cron secret", expect: everyone(401),
     call: (w, a) => status(h(cronRoute.POST)(w.req("/api/cron/reminders", a, { method: "POST" }), ctx({}))) },
+  { file: "app/api/ops/backup/route.ts", exportName: "POST", what: "ask for a backup without the operations secret (an operator's session is not enough)", expect: everyone(401),
+    call: (w, a) => status(h(backupRoute.POST)(w.req("/api/ops/backup", a, { method: "POST" }), ctx({}))) },
   { file: "app/unsubscribe/[token]/one-click/route.ts", exportName: "POST", what: "one-click unsubscribe with a forged token", expect: everyone(404),
     call: (w, a) => status(h(oneClickRoute.POST)(w.req("/unsubscribe/e30.forged/one-click", a, { method: "POST" }), ctx({ token: "e30.forged" }))) },
   { file: "app/unsubscribe/[token]/one-click/route.ts", exportName: "GET", what: "the one-click address opened by hand", expect: everyone(303),
