@@ -520,7 +520,8 @@ export async function sendDuePassEndedNotices({ now }: { now: Date }) {
   const due = await db
     .select({ id: shopPass.id })
     .from(shopPass)
-    .where(and(isNull(shopPass.endNoticeSentAt), or(lte(shopPass.endsAt, now), and(isNotNull(shopPass.revokedAt), lte(shopPass.revokedAt, now)))))
+    // ended_at is the earlier of the end and the revocation: "ended by time or revoked", one indexed range.
+    .where(and(isNull(shopPass.endNoticeSentAt), lte(shopPass.endedAt, now)))
     .limit(500);
   let sent = 0;
   for (const p of due) if (await sendPassEndedNotice({ passId: p.id, now })) sent += 1;
