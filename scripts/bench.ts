@@ -170,7 +170,11 @@ async function explainAll(dataDir: string, fx: Fixture): Promise<{ name: string;
       ["service entries of a set (delete path)", `select id from service_entry where set_id = '${fx.adaSetId}'`],
       ["readings of a check (delete path)", `select id from tread_reading where check_id = '${someCheck}'`],
       ["passes of a driver", `select * from shop_pass where driver_id = '${adaId}' order by created_at desc limit 200`],
-      ["due pass-ended notices", `select id from shop_pass where end_notice_sent_at is null and (ends_at <= now() or (revoked_at is not null and revoked_at <= now())) limit 500`],
+      [
+        "due pass-ended notices",
+        `select id from shop_pass where end_notice_sent_at is null and ended_at <= now() limit 500`,
+        `select id from shop_pass where end_notice_sent_at is null and (ends_at <= now() or (revoked_at is not null and revoked_at <= now())) limit 500`,
+      ],
       ["feed by its secret", `select * from reminder_feed where token_hash = 'x' and revoked_at is null`],
     ];
     const out: { name: string; verdict: string; ok: boolean }[] = [];
@@ -190,7 +194,7 @@ async function explainAll(dataDir: string, fx: Fixture): Promise<{ name: string;
         continue;
       }
       const scans = seqScans(plan, large);
-      out.push({ name, verdict: scans.length ? `SEQ SCAN of ${[...new Set(scans)].join(", ")}` : "index only", ok: scans.length === 0 });
+      out.push({ name, verdict: scans.length ? `SEQ SCAN of ${[...new Set(scans)].join(", ")}` : "no sequential scan of a large table", ok: scans.length === 0 });
     }
     return out;
   } finally {
