@@ -172,7 +172,7 @@ async function explainAll(dataDir: string, fx: Fixture): Promise<{ name: string;
       ["passes of a driver", `select * from shop_pass where driver_id = '${adaId}' order by created_at desc limit 200`],
       [
         "due pass-ended notices",
-        `select id from shop_pass where end_notice_sent_at is null and ended_at <= now() limit 500`,
+        `select id from shop_pass where end_notice_sent_at is null and ended_at <= now() order by ended_at limit 500`,
         `select id from shop_pass where end_notice_sent_at is null and (ends_at <= now() or (revoked_at is not null and revoked_at <= now())) limit 500`,
       ],
       ["feed by its secret", `select * from reminder_feed where token_hash = 'x' and revoked_at is null`],
