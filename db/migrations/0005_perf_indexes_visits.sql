@@ -21,6 +21,6 @@ CREATE INDEX "access_log_shop_idx" ON "access_log" USING btree ("shop_id");--> s
 CREATE INDEX "access_log_actor_idx" ON "access_log" USING btree ("actor_user_id");--> statement-breakpoint
 CREATE UNIQUE INDEX "access_log_visit_uq" ON "access_log" USING btree ("pass_id","vehicle_id","actor_user_id","action","visit_start");--> statement-breakpoint
 CREATE INDEX "shop_pass_shop_ended_idx" ON "shop_pass" USING btree ("shop_id","ended_at");--> statement-breakpoint
-CREATE INDEX "shop_pass_notice_due_idx" ON "shop_pass" USING btree ("ends_at") WHERE end_notice_sent_at is null;--> statement-breakpoint
+CREATE INDEX "shop_pass_notice_due_idx" ON "shop_pass" USING btree ("ended_at") WHERE end_notice_sent_at is null;--> statement-breakpoint
 CREATE INDEX "access_log_pass_idx" ON "access_log" USING btree ("pass_id","at");--> statement-breakpoint
 CREATE INDEX "shop_pass_driver_idx" ON "shop_pass" USING btree ("driver_id","created_at");

@@ -534,7 +534,10 @@ export async function sendDuePassEndedNotices({ now }: { now: Date }) {
   const due = await db
     .select({ id: shopPass.id })
     .from(shopPass)
-    .where(and(isNull(shopPass.endNoticeSentAt), or(lte(shopPass.endsAt, now), and(isNotNull(shopPass.revokedAt), lte(shopPass.revokedAt, now)))))
+    // ended_at is the earlier of the end and the revocation: "ended by time or revoked", one indexed range.
+    .where(and(isNull(shopPass.endNoticeSentAt), lte(shopPass.endedAt, now)))
+    // Oldest first, in the partial index's order: with LIMIT the planner then reads the index, not the table.
+    .orderBy(asc(shopPass.endedAt))
     .limit(500);
   let sent = 0;
   for (const p of due) if (await sendPassEndedNotice({ passId: p.id, now })) sent += 1;

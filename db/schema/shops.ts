@@ -56,7 +56,7 @@ export const shopPass = pgTable(
     index("shop_pass_shop_idx").on(t.shopId, t.endsAt),
     index("shop_pass_shop_ended_idx").on(t.shopId, t.endedAt),
     // The daily "pass ended" notices look only at passes without one.
-    index("shop_pass_notice_due_idx").on(t.endsAt).where(sql`end_notice_sent_at is null`),
+    index("shop_pass_notice_due_idx").on(t.endedAt).where(sql`end_notice_sent_at is null`),
   ],
 );
 
