@@ -2,3 +2,4 @@ export * from "./auth";
 export * from "./drivers";
 export * from "./logbook";
 export * from "./shops";
+export * from "./household";
