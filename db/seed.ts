@@ -2,6 +2,7 @@
 // conditions and reminders stay interesting whenever the demo is loaded.
 import { seedAccounts, type DemoIds } from "./seed/accounts";
 import { seedLogbook } from "./seed/logbook";
+import { seedHousehold } from "./seed/household";
 import { seedPasses } from "./seed/passes";
 import { seedReminders } from "./seed/reminders";
 
@@ -12,6 +13,8 @@ const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [
   { name: "logbook", run: seedLogbook },
   // After the logbook part: it gives the shop passes to Ada's vehicles.
   { name: "passes", run: async (ctx) => void (await seedPasses(ctx)) },
+  // Tomas co-keeps Ada's estate car.
+  { name: "household", run: seedHousehold },
   // Last: it only sets the drivers' reminder settings.
   { name: "reminders", run: seedReminders },
 ];

@@ -49,7 +49,7 @@ export function historyRows(book: VehicleLogbook, depthUnit: DepthUnit): History
         return `${positionOf.get(r.tireId) ?? "Tire"} ${r.approximate ? "≈" : ""}${formatDepth(min, depthUnit)}`;
       })
       .join(" · "),
-    by: c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You",
+    by: c.measuredBy === "shop" ? (c.shopName ?? "A shop") : c.byViewer ? "You" : (c.authorName ?? "The owner"),
   }));
   const service: HistoryRow[] = book.service.map((s) => ({
     id: `s-${s.id}`,
@@ -58,7 +58,7 @@ export function historyRows(book: VehicleLogbook, depthUnit: DepthUnit): History
     setName: setName(s.setId),
     odometerKm: s.odometerKm,
     details: [s.notes, s.costCents != null ? formatMoney(s.costCents, book.sets.find((x) => x.id === s.setId)?.currency ?? "EUR") : null].filter(Boolean).join(" · "),
-    by: s.shopName ?? "You",
+    by: s.shopName ?? (s.byViewer ? "You" : (s.authorName ?? "The owner")),
   }));
   return [...checks, ...service].sort((a, b) => b.date.localeCompare(a.date));
 }

@@ -5,6 +5,7 @@ import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { odometerReading, serviceEntry, tire, tireSet, treadCheck, treadReading, vehicle } from "@/db/schema";
+import { driverVehicles } from "./access";
 import type { LogbookInput, OdometerEntry, SetInput, SetKind, TireInput, VehicleInput } from "@/lib/tires";
 
 type Position = TireInput["position"];
@@ -13,14 +14,14 @@ export const toCoreKind = (k: (typeof tireSet.$inferSelect)["kind"]): SetKind =>
 export const toCorePosition = (p: (typeof tire.$inferSelect)["position"]): Position => p.replace("_", "-") as Position;
 
 /**
- * The logbook of one driver (all vehicles) or of the given vehicles. Callers
+ * The logbook of one driver (all vehicles they own or co-keep) or of the given vehicles. Callers
  * authorise first: this reads whatever it is asked for.
  */
 export async function loadLogbookInput(scope: { ownerId: string } | { vehicleIds: string[] }): Promise<LogbookInput> {
   const vehicles = await db
     .select({ id: vehicle.id, nickname: vehicle.nickname })
     .from(vehicle)
-    .where("ownerId" in scope ? eq(vehicle.ownerId, scope.ownerId) : inArray(vehicle.id, scope.vehicleIds.length ? scope.vehicleIds : ["00000000-0000-0000-0000-000000000000"]))
+    .where("ownerId" in scope ? driverVehicles(scope.ownerId) : inArray(vehicle.id, scope.vehicleIds.length ? scope.vehicleIds : ["00000000-0000-0000-0000-000000000000"]))
     .orderBy(asc(vehicle.createdAt));
   if (vehicles.length === 0) return { vehicles: [] };
   const vehicleIds = vehicles.map((v) => v.id);

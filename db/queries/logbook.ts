@@ -21,7 +21,7 @@ import type { LogbookAccess } from "@/lib/auth/logbook-access";
 import { notFound } from "@/lib/errors";
 import { axlePattern, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
 import { remindersFor } from "./reminders";
-import { assertVehicleAccess } from "./access";
+import { assertVehicleAccess, driverVehicles, type VehicleRole } from "./access";
 import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireView } from "./logbook-view";
 import type { Condition } from "@/lib/tires";
 
@@ -78,6 +78,8 @@ export type CheckView = {
   method: "gauge" | "coin";
   shopName: string | null;
   authorName: string | null;
+  /** Written by the reader (or, with no author kept, by the owner reading it): shown as "You". */
+  byViewer: boolean;
   notes: string | null;
   readings: ReadingRow[];
 };
@@ -92,6 +94,7 @@ export type ServiceView = {
   notes: string | null;
   shopName: string | null;
   authorName: string | null;
+  byViewer: boolean;
 };
 
 export type AttachmentView = {
@@ -107,6 +110,8 @@ export type AttachmentView = {
 
 export type VehicleLogbook = {
   vehicle: typeof vehicle.$inferSelect;
+  /** How the reader relates to the vehicle; co-keepers and shops see no access log and no owner-only controls. */
+  role: VehicleRole;
   viewer: Prefs;
   sets: SetView[];
   checks: CheckView[];
@@ -130,7 +135,7 @@ export async function getVehicleLogbook({
   today: string;
   action?: string;
 }): Promise<VehicleLogbook> {
-  await assertVehicleAccess(access, { vehicleId, action });
+  const role = await assertVehicleAccess(access, { vehicleId, action });
   const [v] = await db.select().from(vehicle).where(eq(vehicle.id, vehicleId)).limit(1);
   if (!v) throw notFound("That vehicle");
   const [owner, viewer] = await Promise.all([driverPrefs({ userId: v.ownerId }), driverPrefs({ userId: access.userId })]);
@@ -208,7 +213,7 @@ export async function getVehicleLogbook({
   setViews.sort((a, b) => STATE_ORDER[a.state] - STATE_ORDER[b.state]);
 
   const log =
-    access.kind === "owner"
+    role === "owner"
       ? await db
           .select({ id: accessLog.id, at: accessLog.at, actorName: accessLog.actorName, action: accessLog.action, detail: accessLog.detail, shopName: organization.name })
           .from(accessLog)
@@ -220,6 +225,7 @@ export async function getVehicleLogbook({
 
   return {
     vehicle: v,
+    role,
     viewer: { units: viewer.units, pressureUnit: viewer.pressureUnit, jurisdiction: owner.jurisdiction },
     sets: setViews,
     checks: checks.map(({ c, shopName, authorName }) => ({
@@ -231,6 +237,7 @@ export async function getVehicleLogbook({
       method: c.method,
       shopName,
       authorName,
+      byViewer: c.authorUserId ? c.authorUserId === access.userId : role === "owner",
       notes: c.notes,
       readings: readingRows.filter((r) => r.checkId === c.id),
     })),
@@ -244,6 +251,7 @@ export async function getVehicleLogbook({
       notes: s.notes,
       shopName,
       authorName,
+      byViewer: s.authorUserId ? s.authorUserId === access.userId : role === "owner",
     })),
     attachments: files.map((f) => ({
       id: f.id,
@@ -287,6 +295,8 @@ export type SetDetail = Awaited<ReturnType<typeof getSetDetail>>;
 export type VehicleSummary = {
   id: string;
   nickname: string;
+  /** The owner's name when the driver keeps this vehicle as a co-keeper. */
+  keptWith: string | null;
   make: string;
   model: string;
   year: number | null;
@@ -300,7 +310,13 @@ export type VehicleSummary = {
 /** The signed-in driver's own vehicles, each with its mounted set's condition, next reminder and last check. */
 export async function listVehicleSummaries({ userId, today }: { userId: string; today: string }): Promise<{ vehicles: VehicleSummary[]; prefs: Prefs; caution: string }> {
   const prefs = await driverPrefs({ userId });
-  const vehicles = await db.select().from(vehicle).where(eq(vehicle.ownerId, userId)).orderBy(asc(vehicle.createdAt));
+  const vehicles = await db
+    .select({ v: vehicle, ownerName: user.name })
+    .from(vehicle)
+    .innerJoin(user, eq(user.id, vehicle.ownerId))
+    .where(driverVehicles(userId))
+    .orderBy(asc(vehicle.createdAt))
+    .then((rows) => rows.map((r) => ({ ...r.v, ownerName: r.ownerName })));
   if (vehicles.length === 0) return { vehicles: [], prefs, caution: CAUTION };
   const ids = vehicles.map((v) => v.id);
   const [sets, tires, readings, lastChecks, reminders] = await Promise.all([
@@ -341,6 +357,7 @@ export async function listVehicleSummaries({ userId, today }: { userId: string; 
       return {
         id: v.id,
         nickname: v.nickname,
+        keptWith: v.ownerId === userId ? null : v.ownerName,
         make: v.make,
         model: v.model,
         year: v.year,
@@ -373,7 +390,7 @@ export async function listVehicleChoices({ userId }: { userId: string }) {
   const rows = await db
     .select({ id: vehicle.id, nickname: vehicle.nickname, make: vehicle.make, model: vehicle.model, placardFrontSize: vehicle.placardFrontSize, placardRearSize: vehicle.placardRearSize, odometerUnit: vehicle.odometerUnit })
     .from(vehicle)
-    .where(eq(vehicle.ownerId, userId))
+    .where(driverVehicles(userId))
     .orderBy(asc(vehicle.createdAt));
   const mounted = rows.length
     ? await db

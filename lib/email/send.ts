@@ -33,7 +33,9 @@ export type EmailKind =
   | "pass-received"
   | "pass-ended"
   | "shop-entry"
-  | "plus-receipt";
+  | "plus-receipt"
+  | "keeper-invitation"
+  | "hand-on";
 
 export type SendEmailInput = {
   to: string | string[];

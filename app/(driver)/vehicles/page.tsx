@@ -55,6 +55,7 @@ export default async function VehiclesOverviewPage() {
                       {v.make} {v.model}
                       {v.year ? ` · ${v.year}` : ""}
                     </p>
+                    {v.keptWith ? <p className="text-sm font-semibold text-groove-800">Kept with {v.keptWith}</p> : null}
                   </div>
                   {v.mountedSet?.condition ? <ConditionBadge condition={v.mountedSet.condition} /> : null}
                 </div>
