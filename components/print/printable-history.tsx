@@ -6,7 +6,7 @@ import type { PrintableHistory } from "@/lib/print/history";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { PrintButton } from "./print-button";
 
-export function PrintableHistoryView({ h, paper, backHref, pdfHref, paperHref }: { h: PrintableHistory; paper: "a4" | "letter"; backHref: string; pdfHref: string; paperHref: (p: "a4" | "letter") => string }) {
+export function PrintableHistoryView({ h, paper, backHref, pdfHref, paperHref }: { h: PrintableHistory; paper: "a4" | "letter"; backHref: string; pdfHref?: string; paperHref: (p: "a4" | "letter") => string }) {
   const cell = "border-b border-asphalt-200 px-1.5 py-1 text-left align-top";
   return (
     <div className="print-sheet mx-auto max-w-[180mm] text-[11pt] leading-snug">
@@ -25,9 +25,11 @@ export function PrintableHistoryView({ h, paper, backHref, pdfHref, paperHref }:
       `}</style>
       <div className="no-print mb-5 flex flex-wrap items-center gap-2">
         <PrintButton />
-        <a href={pdfHref} download className={buttonVariants({ variant: "secondary" })}>
-          Download PDF
-        </a>
+        {pdfHref ? (
+          <a href={pdfHref} download className={buttonVariants({ variant: "secondary" })}>
+            Download PDF
+          </a>
+        ) : null}
         <span className="text-sm text-asphalt-700">Paper:</span>
         <Link href={paperHref("a4")} aria-current={paper === "a4" ? "page" : undefined} className={buttonVariants({ variant: paper === "a4" ? "primary" : "ghost", size: "sm" })}>
           A4

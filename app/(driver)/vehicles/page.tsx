@@ -9,6 +9,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { listVehicleSummaries } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
+import { HandedOnList } from "@/components/household/handed-on-list";
 import { distanceUnitFor, formatDistance } from "@/lib/units";
 import { todayIso } from "@/lib/validation/logbook";
 
@@ -129,6 +130,7 @@ export default async function VehiclesOverviewPage() {
         </ul>
       )}
       <SafetyNote />
+      <HandedOnList userId={session.user.id} />
     </>
   );
 }
