@@ -1,5 +1,6 @@
 import { notFound, redirect } from "next/navigation";
 import { PrintableHistoryView } from "@/components/print/printable-history";
+import { LocalTime } from "@/components/household/local-time";
 import { Alert } from "@/components/ui/alert";
 import { getSnapshot } from "@/db/queries/hand-on";
 import { getSession } from "@/lib/auth/session";
@@ -20,7 +21,7 @@ export default async function HandedOnPage({ params, searchParams }: { params: P
   return (
     <>
       <Alert tone="info" className="no-print mb-4" title="A read-only copy">
-        You handed this vehicle on {new Date(snap.handedOnAt).toLocaleDateString()}; this is its tire history as it was that day.
+        You handed this vehicle on <LocalTime iso={snap.handedOnAt} dateOnly />; this is its tire history as it was that day.
       </Alert>
       <PrintableHistoryView h={snap.history} paper={paper} backHref="/vehicles" paperHref={(p) => `/vehicles/handed-on/${snapshotId}?paper=${p}`} />
     </>
