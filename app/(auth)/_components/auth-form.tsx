@@ -89,6 +89,8 @@ export function SignInForm() {
 
 export function SignUpForm() {
   const router = useRouter();
+  // An invitation or hand-on link sends people here with ?next= to come back to it.
+  const next = useSafeNext();
   const [error, setError] = useState<string | null>(null);
   const form = useForm<z.infer<typeof signUpSchema>>({ resolver: zodResolver(signUpSchema) });
   return (
@@ -106,7 +108,7 @@ export function SignUpForm() {
           );
           return;
         }
-        router.push("/vehicles");
+        router.push(next === "/start" ? "/vehicles" : next);
         router.refresh();
       })}
     >
