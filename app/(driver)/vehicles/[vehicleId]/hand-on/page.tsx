@@ -6,7 +6,7 @@ import { openHandOnOf } from "@/db/queries/hand-on";
 import { getVehicleLogbook } from "@/db/queries/logbook";
 import { ownerAccess } from "@/lib/auth/logbook-access";
 import { getSession } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
+import { Alert } from "@/components/ui/alert";
 import { todayIso } from "@/lib/validation/logbook";
 
 export const dynamic = "force-dynamic";
@@ -17,7 +17,13 @@ export default async function HandOnPage({ params }: { params: Promise<{ vehicle
   if (!session) redirect(`/sign-in?next=/vehicles/${vehicleId}/hand-on`);
   const access = ownerAccess(session);
   const book = await getVehicleLogbook({ access, vehicleId, today: todayIso() }).catch(orNotFound);
-  if (book.role !== "owner") throw new AppError("forbidden", "Only the vehicle's owner can hand it on.");
+  if (book.role !== "owner") {
+    return (
+      <Alert tone="warning" title="Only the owner hands a vehicle on">
+        You keep {book.vehicle.nickname}&apos;s logbook as a co-keeper; its owner decides who takes it on.
+      </Alert>
+    );
+  }
   const open = await openHandOnOf({ access, vehicleId });
   return (
     <div className="mx-auto max-w-2xl">
