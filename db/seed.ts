@@ -3,6 +3,7 @@
 import { seedAccounts, type DemoIds } from "./seed/accounts";
 import { seedBilling } from "./seed/billing";
 import { seedLogbook } from "./seed/logbook";
+import { seedHousehold } from "./seed/household";
 import { seedPasses } from "./seed/passes";
 import { seedReminders } from "./seed/reminders";
 
@@ -15,6 +16,8 @@ const parts: { name: string; run: (ctx: SeedContext) => Promise<void> }[] = [
   { name: "logbook", run: seedLogbook },
   // After the logbook part: it gives the shop passes to Ada's vehicles.
   { name: "passes", run: async (ctx) => void (await seedPasses(ctx)) },
+  // Tomas co-keeps Ada's estate car.
+  { name: "household", run: seedHousehold },
   // Last: it only sets the drivers' reminder settings.
   { name: "reminders", run: seedReminders },
 ];

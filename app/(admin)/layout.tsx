@@ -17,6 +17,7 @@ export default async function AdminLayout({ children }: { children: ReactNode })
       nav={[
         { href: "/admin", label: "Accounts", exact: true },
         { href: "/admin/shops", label: "Shops" },
+        { href: "/admin/audit", label: "Audit log" },
       ]}
     >
       {children}

@@ -1,17 +1,17 @@
 "use client";
 // Export and deletion of everything the account holds.
 import { zodResolver } from "@hookform/resolvers/zod";
-import { Download, Trash2 } from "lucide-react";
+import { Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { buttonVariants } from "@/components/ui/button-variants";
 import { Card, CardTitle } from "@/components/ui/card";
 import { Field, Input } from "@/components/ui/field";
 import { deleteAccountSchema } from "@/lib/validation/account";
+import { ExportCard, ImportCard } from "./logbook-transfer";
 
 type DeleteInput = z.infer<typeof deleteAccountSchema>;
 
@@ -21,16 +21,8 @@ export function AccountData() {
   const form = useForm<DeleteInput>({ resolver: zodResolver(deleteAccountSchema) });
   return (
     <div className="grid gap-5 md:grid-cols-2">
-      <Card>
-        <CardTitle>Take your logbook with you</CardTitle>
-        <p className="mt-1 text-sm text-asphalt-700">
-          One JSON file with your vehicles, sets, date codes, tread checks, service history, passes and their access log.
-        </p>
-        <a href="/api/account/export" download className={buttonVariants({ variant: "secondary", className: "mt-4" })}>
-          <Download aria-hidden className="size-4" />
-          Download everything
-        </a>
-      </Card>
+      <ExportCard />
+      <ImportCard />
       <Card className="border-condition-replace/30">
         <CardTitle>Delete the account</CardTitle>
         <p className="mt-1 text-sm text-asphalt-700">

@@ -54,7 +54,7 @@ export function historyRows(book: VehicleLogbook, depthUnit: DepthUnit, f: Forma
         return `${positionOf.get(r.tireId) ?? "Tire"} ${r.approximate ? "≈" : ""}${f.depth(min, depthUnit)}`;
       })
       .join(" · "),
-    by: c.measuredBy === "shop" ? (c.shopName ?? "A shop") : "You",
+    by: c.measuredBy === "shop" ? (c.shopName ?? "A shop") : c.byViewer ? "You" : (c.authorName ?? "The owner"),
   }));
   const service: HistoryRow[] = book.service.map((s) => ({
     id: `s-${s.id}`,
@@ -63,7 +63,7 @@ export function historyRows(book: VehicleLogbook, depthUnit: DepthUnit, f: Forma
     setName: setName(s.setId),
     odometerKm: s.odometerKm,
     details: [s.notes, s.costCents != null ? f.money(s.costCents, book.sets.find((x) => x.id === s.setId)?.currency ?? "EUR") : null].filter(Boolean).join(" · "),
-    by: s.shopName ?? "You",
+    by: s.shopName ?? (s.byViewer ? "You" : (s.authorName ?? "The owner")),
   }));
   return [...checks, ...service].sort((a, b) => b.date.localeCompare(a.date));
 }

@@ -3,6 +3,7 @@
 // and the shops' access log. Data through TanStack Query, seeded by the server.
 import { FormActions } from "@/components/ui/form-actions";
 import { AccessLogTable } from "@/components/passes/access-log-table";
+import { VehicleSharing } from "@/components/household/vehicle-sharing";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
@@ -138,7 +139,9 @@ export function VehicleLogbookView({
         {book.attachments.length === 0 ? <p className="text-asphalt-600">None yet.</p> : <FileList files={book.attachments} deletable={canManage ? id : undefined} />}
       </section>
 
-      {canManage ? (
+      {canManage ? <VehicleSharing vehicleId={id} nickname={v.nickname} /> : null}
+
+      {canManage && book.role === "owner" ? (
         <section aria-labelledby="log-h" className="mb-8 space-y-3">
           <h2 id="log-h" className="text-xl font-bold">
             Who looked at this logbook

@@ -1,17 +1,26 @@
 import "server-only";
-// The one check in front of every logbook read and write. An owner sees only
-// their own vehicles (another driver's vehicle is "not found", never
-// "forbidden", so its existence is not revealed). A pass holder sees only the
+// The one check in front of every logbook read and write. A driver sees only
+// the vehicles they own or keep with the owner as an active co-keeper
+// (another driver's vehicle is "not found", never "forbidden", so its
+// existence is not revealed); owner-only actions refuse a co-keeper. A pass holder sees only the
 // vehicles of the pass, only while it lasts, writes only with `view_add`, and
 // every read and write under a pass lands in the vehicle's access log: a
 // write as a row of its own, reads counted into one row per visit window.
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq, inArray, or, sql, type SQL } from "drizzle-orm";
 import { db, type Transaction } from "@/db";
-import { accessLog, member, shopPass, shopPassVehicle, vehicle } from "@/db/schema";
+import { accessLog, member, shopPass, shopPassVehicle, vehicle, vehicleKeeper } from "@/db/schema";
 import { canWrite, type LogbookAccess } from "@/lib/auth/logbook-access";
 import { AppError, notFound } from "@/lib/errors";
 
-export type VehicleCheck = { vehicleId: string; write?: boolean; action: string; detail?: string; now?: Date };
+export type VehicleCheck = {
+  vehicleId: string;
+  write?: boolean;
+  /** Set for what only the vehicle's owner may do (delete it, hand it on, manage co-keepers, give passes). */
+  ownerOnly?: boolean;
+  action: string;
+  detail?: string;
+  now?: Date;
+};
 
 /** Reads under a pass within one such window (aligned to the clock) make one access-log row with a count. */
 export const ACCESS_VISIT_MS = 30 * 60 * 1000;
@@ -20,17 +29,27 @@ export function visitStartOf(at: Date): Date {
   return new Date(Math.floor(at.getTime() / ACCESS_VISIT_MS) * ACCESS_VISIT_MS);
 }
 
-export async function assertVehicleAccess(access: LogbookAccess, check: VehicleCheck, tx: Transaction | typeof db = db) {
+/** How the acting driver relates to the vehicle: "owner", "keeper" (co-keeper), or "pass" (a shop). */
+export type VehicleRole = "owner" | "keeper" | "pass";
+
+export async function assertVehicleAccess(access: LogbookAccess, check: VehicleCheck, tx: Transaction | typeof db = db): Promise<VehicleRole> {
   if (!/^[0-9a-f-]{36}$/i.test(check.vehicleId)) throw notFound("That vehicle");
   if (access.kind === "owner") {
     const [row] = await tx
-      .select({ id: vehicle.id })
+      .select({ ownerId: vehicle.ownerId, keeperId: vehicleKeeper.id })
       .from(vehicle)
-      .where(and(eq(vehicle.id, check.vehicleId), eq(vehicle.ownerId, access.userId)))
+      .leftJoin(
+        vehicleKeeper,
+        and(eq(vehicleKeeper.vehicleId, vehicle.id), eq(vehicleKeeper.userId, access.userId), eq(vehicleKeeper.state, "active")),
+      )
+      .where(and(eq(vehicle.id, check.vehicleId), or(eq(vehicle.ownerId, access.userId), eq(vehicleKeeper.state, "active"))))
       .limit(1);
     if (!row) throw notFound("That vehicle");
-    return;
+    if (row.ownerId === access.userId) return "owner";
+    if (check.ownerOnly) throw new AppError("forbidden", "Only the vehicle's owner can do that; co-keepers keep the logbook.");
+    return "keeper";
   }
+  if (check.ownerOnly) throw new AppError("forbidden", "Only the vehicle's owner can do that.");
   if (!access.vehicleIds.includes(check.vehicleId)) throw notFound("That vehicle");
   const now = check.now ?? new Date();
   if (now >= access.endsAt) {
@@ -80,7 +99,7 @@ export async function assertVehicleAccess(access: LogbookAccess, check: VehicleC
   };
   if (check.write) {
     await tx.insert(accessLog).values(row);
-    return;
+    return "pass";
   }
   // One statement, so two concurrent reads of the same visit count twice into one row.
   await tx
@@ -90,4 +109,18 @@ export async function assertVehicleAccess(access: LogbookAccess, check: VehicleC
       target: [accessLog.passId, accessLog.vehicleId, accessLog.actorUserId, accessLog.action, accessLog.visitStart],
       set: { count: sql`${accessLog.count} + 1`, lastAt: now },
     });
+  return "pass";
+}
+
+/** The vehicles a driver keeps with their owner (active co-keeper arrangements). */
+export function keptVehicleIds(userId: string) {
+  return db
+    .select({ id: vehicleKeeper.vehicleId })
+    .from(vehicleKeeper)
+    .where(and(eq(vehicleKeeper.userId, userId), eq(vehicleKeeper.state, "active")));
+}
+
+/** The filter of a driver's vehicle lists: owned, or kept as a co-keeper. */
+export function driverVehicles(userId: string): SQL {
+  return or(eq(vehicle.ownerId, userId), inArray(vehicle.id, keptVehicleIds(userId)))!;
 }

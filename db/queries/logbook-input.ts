@@ -5,6 +5,7 @@ import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { odometerReading, serviceEntry, tire, tireSet, treadCheck, treadReading, vehicle } from "@/db/schema";
+import { driverVehicles } from "./access";
 import type { LogbookInput, OdometerEntry, SetInput, SetKind, TireInput, VehicleInput } from "@/lib/tires";
 
 type Position = TireInput["position"];
@@ -16,15 +17,15 @@ export const toCorePosition = (p: (typeof tire.$inferSelect)["position"]): Posit
 export type LogbookRows = Awaited<ReturnType<typeof loadLogbookRows>>;
 
 /**
- * The rows of one driver's logbook (all vehicles) or of the given vehicles.
+ * The rows of one driver's logbook (all vehicles they own or co-keep) or of the given vehicles.
  * Retired sets come without tires and readings: nothing computed from a
- * logbook looks at them. Callers authorise first.
+ * logbook looks at them. Callers authorise first: this reads whatever it is asked for.
  */
 export async function loadLogbookRows(scope: { ownerId: string } | { vehicleIds: string[] }) {
   const vehicles = await db
     .select({ id: vehicle.id, nickname: vehicle.nickname })
     .from(vehicle)
-    .where("ownerId" in scope ? eq(vehicle.ownerId, scope.ownerId) : inArray(vehicle.id, scope.vehicleIds.length ? scope.vehicleIds : ["00000000-0000-0000-0000-000000000000"]))
+    .where("ownerId" in scope ? driverVehicles(scope.ownerId) : inArray(vehicle.id, scope.vehicleIds.length ? scope.vehicleIds : ["00000000-0000-0000-0000-000000000000"]))
     .orderBy(asc(vehicle.createdAt));
   if (vehicles.length === 0) return { vehicles, sets: [], tires: [], readings: [], odometers: [], services: [] };
   const vehicleIds = vehicles.map((v) => v.id);

@@ -24,7 +24,7 @@ import { AppError, notFound } from "@/lib/errors";
 import { axlePattern, distancePerDay, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
 import { remindersFor } from "./reminders";
 import { loadLogbookRows, toLogbookInput } from "./logbook-input";
-import { assertVehicleAccess } from "./access";
+import { assertVehicleAccess, driverVehicles, type VehicleRole } from "./access";
 import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireCondition, type TireView } from "./logbook-view";
 
 type Db = Transaction | typeof db;
@@ -80,6 +80,8 @@ export type CheckView = {
   method: "gauge" | "coin";
   shopName: string | null;
   authorName: string | null;
+  /** Written by the reader (or, with no author kept, by the owner reading it): shown as "You". */
+  byViewer: boolean;
   notes: string | null;
   readings: ReadingRow[];
 };
@@ -94,6 +96,7 @@ export type ServiceView = {
   notes: string | null;
   shopName: string | null;
   authorName: string | null;
+  byViewer: boolean;
 };
 
 export type AttachmentView = {
@@ -109,6 +112,8 @@ export type AttachmentView = {
 
 export type VehicleLogbook = {
   vehicle: typeof vehicle.$inferSelect;
+  /** How the reader relates to the vehicle; co-keepers and shops see no access log and no owner-only controls. */
+  role: VehicleRole;
   viewer: Prefs;
   sets: SetView[];
   checks: CheckView[];
@@ -157,7 +162,7 @@ export async function getVehicleLogbook({
   today: string;
   action?: string;
 } & LoadOptions): Promise<VehicleLogbook> {
-  await assertVehicleAccess(access, { vehicleId, action });
+  const role = await assertVehicleAccess(access, { vehicleId, action });
   const limit = opts.historyLimit ?? HISTORY_PAGE;
   const [v] = await db.select().from(vehicle).where(eq(vehicle.id, vehicleId)).limit(1);
   if (!v) throw notFound("That vehicle");
@@ -173,8 +178,8 @@ export async function getVehicleLogbook({
       .from(treadReading)
       .innerJoin(treadCheck, eq(treadReading.checkId, treadCheck.id))
       .where(opts.setId ? and(eq(treadCheck.vehicleId, vehicleId), eq(treadCheck.setId, opts.setId)) : eq(treadCheck.vehicleId, vehicleId)),
-    pageChecks({ vehicleId, setId: opts.setId, limit }),
-    opts.setId ? Promise.resolve({ service: [], nextCursor: null }) : pageService({ vehicleId, limit }),
+    pageChecks({ vehicleId, setId: opts.setId, limit, viewer: { userId: access.userId, role } }),
+    opts.setId ? Promise.resolve({ service: [], nextCursor: null }) : pageService({ vehicleId, limit, viewer: { userId: access.userId, role } }),
     db
       .select()
       .from(attachment)
@@ -237,7 +242,7 @@ export async function getVehicleLogbook({
   setViews.sort((a, b) => STATE_ORDER[a.state] - STATE_ORDER[b.state]);
 
   const log =
-    access.kind === "owner" && !opts.setId
+    role === "owner" && !opts.setId
       ? await db
           .select({ id: accessLog.id, at: accessLog.at, actorName: accessLog.actorName, action: accessLog.action, detail: accessLog.detail, count: accessLog.count, lastAt: accessLog.lastAt, shopName: sql<string>`coalesce(${organization.name}, ${accessLog.shopName}, 'A closed shop')` })
           .from(accessLog)
@@ -249,6 +254,7 @@ export async function getVehicleLogbook({
 
   return {
     vehicle: v,
+    role,
     viewer: { units: viewer.units, pressureUnit: viewer.pressureUnit, jurisdiction: owner.jurisdiction },
     sets: setViews,
     checks: checkPage.checks,
@@ -287,7 +293,11 @@ function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {
  * A page of a vehicle's tread checks with their readings, newest first
  * (check date, then entry time, then id). Callers authorise first.
  */
-export async function pageChecks({ vehicleId, setId, cursor, limit = HISTORY_PAGE }: { vehicleId: string; setId?: string; cursor?: string | null; limit?: number }): Promise<{ checks: CheckView[]; nextCursor: string | null }> {
+/** Who reads the page: entries they wrote show as "You" (`byViewer`). */
+type PageViewer = { userId: string; role: VehicleRole };
+const writtenBy = (authorUserId: string | null, viewer?: PageViewer) => (viewer ? (authorUserId ? authorUserId === viewer.userId : viewer.role === "owner") : false);
+
+export async function pageChecks({ vehicleId, setId, cursor, limit = HISTORY_PAGE, viewer }: { vehicleId: string; setId?: string; cursor?: string | null; limit?: number; viewer?: PageViewer }): Promise<{ checks: CheckView[]; nextCursor: string | null }> {
   const after = decodeCursor(cursor, historyCursor);
   const c = after ? new Date(after.c) : null;
   if (c && Number.isNaN(c.getTime())) throw badCursor();
@@ -327,6 +337,7 @@ export async function pageChecks({ vehicleId, setId, cursor, limit = HISTORY_PAG
       method: k.method,
       shopName,
       authorName,
+      byViewer: writtenBy(k.authorUserId, viewer),
       notes: k.notes,
       readings: byCheck.get(k.id) ?? [],
     })),
@@ -335,7 +346,7 @@ export async function pageChecks({ vehicleId, setId, cursor, limit = HISTORY_PAG
 }
 
 /** A page of a vehicle's service entries, newest first. Callers authorise first. */
-export async function pageService({ vehicleId, cursor, limit = HISTORY_PAGE }: { vehicleId: string; cursor?: string | null; limit?: number }): Promise<{ service: ServiceView[]; nextCursor: string | null }> {
+export async function pageService({ vehicleId, cursor, limit = HISTORY_PAGE, viewer }: { vehicleId: string; cursor?: string | null; limit?: number; viewer?: PageViewer }): Promise<{ service: ServiceView[]; nextCursor: string | null }> {
   const after = decodeCursor(cursor, historyCursor);
   const c = after ? new Date(after.c) : null;
   if (c && Number.isNaN(c.getTime())) throw badCursor();
@@ -367,6 +378,7 @@ export async function pageService({ vehicleId, cursor, limit = HISTORY_PAGE }: {
       notes: s.notes,
       shopName,
       authorName,
+      byViewer: writtenBy(s.authorUserId, viewer),
     })),
     nextCursor: rows.length > limit && lastRow ? encodeCursor({ t: lastRow.s.performedOn, c: lastRow.s.createdAt.toISOString(), id: lastRow.s.id }) : null,
   };
@@ -405,6 +417,8 @@ export type SetDetail = Awaited<ReturnType<typeof getSetDetail>>;
 export type VehicleSummary = {
   id: string;
   nickname: string;
+  /** The owner's name when the driver keeps this vehicle as a co-keeper. */
+  keptWith: string | null;
   make: string;
   model: string;
   year: number | null;
@@ -432,7 +446,14 @@ export async function listVehicleSummaries({ userId, today }: { userId: string; 
   if (rows.vehicles.length === 0) return { vehicles: [], prefs, caution: CAUTION };
   const ids = rows.vehicles.map((v) => v.id);
   const [vehicles, lastChecks, reminders] = await Promise.all([
-    db.select().from(vehicle).where(eq(vehicle.ownerId, userId)).orderBy(asc(vehicle.createdAt)),
+    // Owned and co-kept vehicles; a co-kept one names its owner.
+    db
+      .select({ v: vehicle, ownerName: user.name })
+      .from(vehicle)
+      .innerJoin(user, eq(user.id, vehicle.ownerId))
+      .where(driverVehicles(userId))
+      .orderBy(asc(vehicle.createdAt))
+      .then((found) => found.map((r) => ({ ...r.v, ownerName: r.ownerName }))),
     db
       .selectDistinctOn([treadCheck.vehicleId], { vehicleId: treadCheck.vehicleId, date: treadCheck.checkedOn, odometerKm: treadCheck.odometerKm })
       .from(treadCheck)
@@ -476,6 +497,7 @@ export async function listVehicleSummaries({ userId, today }: { userId: string; 
       return {
         id: v.id,
         nickname: v.nickname,
+        keptWith: v.ownerId === userId ? null : v.ownerName,
         make: v.make,
         model: v.model,
         year: v.year,
@@ -508,7 +530,7 @@ export async function listVehicleChoices({ userId }: { userId: string }) {
   const rows = await db
     .select({ id: vehicle.id, nickname: vehicle.nickname, make: vehicle.make, model: vehicle.model, placardFrontSize: vehicle.placardFrontSize, placardRearSize: vehicle.placardRearSize, odometerUnit: vehicle.odometerUnit })
     .from(vehicle)
-    .where(eq(vehicle.ownerId, userId))
+    .where(driverVehicles(userId))
     .orderBy(asc(vehicle.createdAt));
   const mounted = rows.length
     ? await db

@@ -75,9 +75,10 @@ export async function resolvePassAccess({ session, passId, now }: { session: Ses
   const s = requireSession(session);
   if (!UUID.test(passId)) throw notFound("That pass");
   const [row] = await db
-    .select({ pass: shopPass, shopName: organization.name })
+    .select({ pass: shopPass, shopName: organization.name, driverBanned: user.banned })
     .from(shopPass)
     .innerJoin(organization, eq(organization.id, shopPass.shopId))
+    .innerJoin(user, eq(user.id, shopPass.driverId))
     .where(eq(shopPass.id, passId))
     .limit(1);
   if (!row || !row.pass.shopId) throw notFound("That pass");
@@ -92,6 +93,8 @@ export async function resolvePassAccess({ session, passId, now }: { session: Ses
     throw new AppError("pass_ended", `This pass ended on ${formatWhen(row.pass.endsAt)}. Ask the driver for a new pass to go on.`);
   }
   if (state === "scheduled") throw forbidden(`This pass starts on ${formatWhen(row.pass.startsAt)}.`);
+  // A driver's account disabled by an operator: its passes stop with it.
+  if (row.driverBanned) throw new AppError("pass_ended", "This pass has stopped: the driver's account is disabled.");
   const vehicles = await db.select({ id: shopPassVehicle.vehicleId }).from(shopPassVehicle).where(eq(shopPassVehicle.passId, passId));
   return {
     kind: "pass",

@@ -20,7 +20,7 @@ export async function createVehicle({ userId, input }: { userId: string; input: 
 export async function updateVehicle({ access, vehicleId, input }: { access: LogbookAccess; vehicleId: string; input: VehicleInput }) {
   requireOwner(access, "change the vehicle");
   return db.transaction(async (tx) => {
-    await assertVehicleAccess(access, { vehicleId, write: true, action: "update_vehicle" }, tx);
+    await assertVehicleAccess(access, { vehicleId, write: true, ownerOnly: true, action: "update_vehicle" }, tx);
     const [row] = await tx
       .update(vehicle)
       .set({ ...toVehicleRow(input), updatedAt: new Date() })
@@ -34,7 +34,7 @@ export async function updateVehicle({ access, vehicleId, input }: { access: Logb
 export async function deleteVehicle({ access, vehicleId }: { access: LogbookAccess; vehicleId: string }) {
   requireOwner(access, "delete the vehicle");
   const files = await db.transaction(async (tx) => {
-    await assertVehicleAccess(access, { vehicleId, write: true, action: "delete_vehicle" }, tx);
+    await assertVehicleAccess(access, { vehicleId, write: true, ownerOnly: true, action: "delete_vehicle" }, tx);
     const files = await tx.select({ storedName: attachment.storedName }).from(attachment).where(eq(attachment.vehicleId, vehicleId));
     await tx.delete(vehicle).where(and(eq(vehicle.id, vehicleId), eq(vehicle.ownerId, access.userId)));
     return files;

@@ -3,3 +3,4 @@ export * from "./drivers";
 export * from "./logbook";
 export * from "./shops";
 export * from "./billing";
+export * from "./household";

@@ -33,7 +33,9 @@ export type EmailKind =
   | "pass-ended"
   | "shop-entry"
   | "plus-receipt"
-  | "plus-payment-failed";
+  | "plus-payment-failed"
+  | "keeper-invitation"
+  | "hand-on";
 
 export type SendEmailInput = {
   to: string | string[];

@@ -70,7 +70,7 @@ test.describe("accounts and roles", () => {
     await session.signOut();
 
     await session.signInAndLand(demoAccounts.ops.email, "/admin");
-    await expect(page.getByRole("cell", { name: demoAccounts.ada.email })).toBeVisible();
+    await expect(page.getByTestId("account-list").getByText(demoAccounts.ada.email)).toBeVisible();
     await page.goto("/shop");
     await expect(page.getByRole("heading", { name: "Not for this account" })).toBeVisible();
   });
@@ -119,6 +119,8 @@ test.describe("accounts and roles", () => {
 
     await session.signInAndLand(demoAccounts.ops.email, "/admin");
     await page.getByRole("button", { name: "Disable Quinn Harrowby" }).click();
+    // Disabling asks first.
+    await page.getByRole("alertdialog").getByRole("button", { name: "Disable" }).click();
     await expect(page.getByRole("button", { name: "Enable Quinn Harrowby" })).toBeVisible();
     await session.signOut();
 

@@ -1,19 +1,15 @@
 "use server";
-import { headers } from "next/headers";
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { setAccountDisabled as setDisabled } from "@/db/queries/admin";
 import { action } from "@/lib/actions";
-import { auth } from "@/lib/auth/server";
-import { AppError } from "@/lib/errors";
 
-const accountSchema = z.object({ userId: z.string().min(1), disable: z.enum(["true", "false"]).transform((v) => v === "true") });
+const accountSchema = z.object({ userId: z.string().min(1).max(100), disable: z.enum(["true", "false"]).transform((v) => v === "true") });
 
-/** Disables (or re-enables) an account; its sessions end at once. */
+/** Disables (or re-enables) an account; its sessions end at once; the audit log records it. */
 export const setAccountDisabled = action(accountSchema, { role: "admin" }, async ({ userId, disable }, { session }) => {
-  if (userId === session.user.id) throw new AppError("conflict", "You cannot disable your own operator account.");
-  const h = await headers();
-  if (disable) await auth.api.banUser({ headers: h, body: { userId, banReason: "Disabled by an operator" } });
-  else await auth.api.unbanUser({ headers: h, body: { userId } });
+  const result = await setDisabled({ actor: session, userId, disable });
   revalidatePath("/admin");
-  return { userId, disabled: disable };
+  revalidatePath("/admin/audit");
+  return result;
 });

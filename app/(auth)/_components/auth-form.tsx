@@ -91,7 +91,7 @@ export function SignInForm() {
 
 export function SignUpForm() {
   const router = useRouter();
-  // An invitation (or any page) that sent the visitor here gets them back after sign-up.
+  // An invitation, a hand-on link (or any page) that sent the visitor here gets them back after sign-up.
   const next = useSafeNext();
   const back = next === "/start" ? null : next;
   const [error, setError] = useState<string | null>(null);

@@ -13,6 +13,7 @@ import { listVehicleSummaries } from "@/db/queries/logbook";
 import { getSession } from "@/lib/auth/session";
 import { depthUnitFor, distanceUnitFor } from "@/lib/units";
 import { SetAtAGlance } from "@/components/visual/set-at-a-glance";
+import { HandedOnList } from "@/components/household/handed-on-list";
 import { todayIso } from "@/lib/validation/logbook";
 
 export const metadata: Metadata = { title: "Vehicles" };
@@ -62,6 +63,7 @@ export default async function VehiclesOverviewPage() {
                       {v.make} {v.model}
                       {v.year ? ` · ${v.year}` : ""}
                     </p>
+                    {v.keptWith ? <p className="text-sm font-semibold text-groove-800">Kept with {v.keptWith}</p> : null}
                   </div>
                   {v.mountedSet?.condition ? <ConditionBadge condition={v.mountedSet.condition} /> : null}
                 </div>
@@ -137,6 +139,7 @@ export default async function VehiclesOverviewPage() {
         </ul>
       )}
       <SafetyNote />
+      <HandedOnList userId={session.user.id} />
     </>
   );
 }

@@ -1,4 +1,5 @@
 import { eq } from "drizzle-orm";
+import { unzipSync } from "fflate";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { session as sessionTable, tire, tireSet, user, vehicle } from "@/db/schema";
@@ -14,7 +15,7 @@ async function giveVehicle(owner: TestUser, nickname: string) {
 }
 
 describe("export of all of a driver's data", () => {
-  it("downloads the account's own logbook as JSON, and nothing of anyone else's", async () => {
+  it("downloads the account's own logbook as a zip, and nothing of anyone else's", async () => {
     const me = await signUp({ name: "Ines Calloway" });
     const other = await signUp();
     await giveVehicle(me, "Blue runabout");
@@ -22,8 +23,9 @@ describe("export of all of a driver's data", () => {
 
     const res = await exportGet(request("/api/account/export", { as: me }), { params: Promise.resolve({}) });
     expect(res.status).toBe(200);
-    expect(res.headers.get("content-disposition")).toMatch(/attachment; filename="fourpatch-logbook-\d{4}-\d{2}-\d{2}\.json"/);
-    const data = await res.json();
+    expect(res.headers.get("content-disposition")).toMatch(/attachment; filename="fourpatch-logbook-\d{4}-\d{2}-\d{2}\.zip"/);
+    const entries = unzipSync(new Uint8Array(await res.arrayBuffer()));
+    const data = JSON.parse(new TextDecoder().decode(entries["fourpatch-export.json"]));
     expect(data.format).toBe("fourpatch-logbook-export");
     expect(data.account.email).toBe(me.email);
     expect(data.vehicles.map((v: { nickname: string }) => v.nickname)).toEqual(["Blue runabout"]);

@@ -10,7 +10,7 @@ import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { billingEvent, billingSubscription, driverProfile, fakeOutbox, fakeStripeObject } from "@/db/schema";
-import { listAccounts } from "@/db/queries/admin";
+import { searchAccounts } from "@/db/queries/admin";
 import { currentSubscription, planOf, storeSubscription } from "@/db/queries/billing";
 import { sessionFromRequest } from "@/lib/auth/session";
 import { POST as webhookPOST } from "@/app/api/stripe/webhook/route";
@@ -112,7 +112,7 @@ describe("checkout through the SDK against the local fake", () => {
     expect(invoices[0]).toMatchObject({ status: "paid", currency: "eur" });
     // The operator's account list shows the same plan, from the same stored subscription.
     const ops = await signUp({ name: "Ops Tester", admin: true });
-    const accounts = await listAccounts({ actor: await sessionFromRequest(request("/", { as: ops })) });
+    const { rows: accounts } = await searchAccounts({ actor: await sessionFromRequest(request("/", { as: ops })) });
     expect(accounts.find((a) => a.id === u.id)?.plan).toBe("plus");
     expect(accounts.find((a) => a.id === ops.id)?.plan).toBe("free");
   });

@@ -58,7 +58,11 @@ describe("demo logbook", () => {
     expect(fl!.innerMm!).toBeLessThan(Math.min(fl!.centreMm!, fl!.outerMm!));
     // The van's all-season set is past 5 years: "watch" by age [practice, trade-facts §3].
     expect(overview.vehicles[1].mountedSet?.condition).toBe("watch");
+    // Tomas has his own car and co-keeps Ada's estate car (db/seed/household.ts).
     const tomas = await listVehicleSummaries({ userId: ids.tomas, today });
-    expect(tomas.vehicles).toHaveLength(1);
+    expect(tomas.vehicles.map((v) => [v.nickname, v.keptWith])).toEqual([
+      [DEMO_VEHICLES.adaCar, "Ada Renwick"],
+      [DEMO_VEHICLES.tomasCar, null],
+    ]);
   });
 });

@@ -1,31 +1,33 @@
 "use client";
-import { useState, useTransition } from "react";
+import { useState } from "react";
 import { toast } from "sonner";
-import { Button } from "@/components/ui/button";
+import { ConfirmButton } from "@/components/household/confirm-button";
 import { setAccountDisabled } from "../actions";
 
 export function DisableToggle({ userId, disabled, name }: { userId: string; disabled: boolean; name: string }) {
-  const [pending, start] = useTransition();
   const [error, setError] = useState<string | null>(null);
   return (
     <div>
-      <Button
+      <ConfirmButton
         size="sm"
         variant={disabled ? "secondary" : "danger"}
-        pending={pending}
-        pendingLabel={disabled ? "Enabling…" : "Disabling…"}
         aria-label={`${disabled ? "Enable" : "Disable"} ${name}`}
-        onClick={() =>
-          start(async () => {
-            setError(null);
-            const res = await setAccountDisabled({ userId, disable: disabled ? "false" : "true" });
-            if (res.status === "error") setError(res.message);
-            else toast.success(`${name} is ${res.data.disabled ? "disabled" : "enabled again"}.`);
-          })
+        title={disabled ? `Enable ${name} again?` : `Disable ${name}?`}
+        description={
+          disabled
+            ? "They can sign in again; their passes and calendar feed work again while they last."
+            : "They are signed out everywhere at once and cannot sign in; the passes they gave stop, and their calendar feed stops. Their data stays. The audit log records this."
         }
+        confirmLabel={disabled ? "Enable" : "Disable"}
+        onConfirm={async () => {
+          setError(null);
+          const res = await setAccountDisabled({ userId, disable: disabled ? "false" : "true" });
+          if (res.status === "error") setError(res.message);
+          else toast.success(`${name} is ${res.data.disabled ? "disabled" : "enabled again"}.`);
+        }}
       >
         {disabled ? "Enable" : "Disable"}
-      </Button>
+      </ConfirmButton>
       {error ? <p role="alert" className="mt-1 text-xs text-condition-replace">{error}</p> : null}
     </div>
   );

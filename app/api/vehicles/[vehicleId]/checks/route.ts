@@ -17,11 +17,12 @@ export const POST = route<{ vehicleId: string }>(async ({ req, params, session }
 
 /** Newest first, with their readings: `?cursor=` from the logbook's `checksNextCursor` or a page's `nextCursor`. */
 export const GET = route<{ vehicleId: string }>(async ({ req, params, session }) => {
-  await assertVehicleAccess(ownerAccess(session!), { vehicleId: params.vehicleId, action: "read_checks" });
+  const access = ownerAccess(session!);
+  const role = await assertVehicleAccess(access, { vehicleId: params.vehicleId, action: "read_checks" });
   const q = new URL(req.url).searchParams;
   const setId = q.get("setId") ?? undefined;
   if (setId !== undefined && !/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(setId)) {
     throw new AppError("invalid", "That is not a set of this vehicle.", { setId: ["Not a set id."] });
   }
-  return pageChecks({ vehicleId: params.vehicleId, setId, cursor: q.get("cursor"), limit: pageLimit(q.get("limit")) });
+  return pageChecks({ vehicleId: params.vehicleId, setId, cursor: q.get("cursor"), limit: pageLimit(q.get("limit")), viewer: { userId: access.userId, role } });
 });

@@ -17,7 +17,8 @@ export const POST = route<{ vehicleId: string }>(async ({ req, params, session }
 
 /** Newest first: `?cursor=` from the logbook's `serviceNextCursor` or a page's `nextCursor`. */
 export const GET = route<{ vehicleId: string }>(async ({ req, params, session }) => {
-  await assertVehicleAccess(ownerAccess(session!), { vehicleId: params.vehicleId, action: "read_service" });
+  const access = ownerAccess(session!);
+  const role = await assertVehicleAccess(access, { vehicleId: params.vehicleId, action: "read_service" });
   const q = new URL(req.url).searchParams;
-  return pageService({ vehicleId: params.vehicleId, cursor: q.get("cursor"), limit: pageLimit(q.get("limit")) });
+  return pageService({ vehicleId: params.vehicleId, cursor: q.get("cursor"), limit: pageLimit(q.get("limit")), viewer: { userId: access.userId, role } });
 });

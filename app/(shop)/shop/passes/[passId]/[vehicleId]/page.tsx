@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { Paperclip, PencilLine } from "lucide-react";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
 import { ShopFittedSetForm } from "@/components/passes/shop-fitted-set-form";
@@ -63,6 +64,9 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
           {v.plate ? ` · ${v.plate}` : ""}
           {logbook.lastOdometer ? ` · ${f.distance(logbook.lastOdometer.odometerKm, v.odometerUnit)} on ${f.date(logbook.lastOdometer.date)}` : ""}
         </p>
+        <Link href={`/shop/passes/${passId}/${vehicleId}/print`} className="mt-1 inline-block font-semibold text-groove-800 underline underline-offset-2">
+          Printable tire history
+        </Link>
       </header>
 
       <section aria-labelledby="on-car" className="space-y-3">
