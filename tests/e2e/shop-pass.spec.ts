@@ -47,7 +47,7 @@ test("a driver shares a logbook with a shop, the technician adds to it, and the 
   for (const p of ["Front left", "Front right", "Rear left", "Rear right"]) await shop.fillDepths(p, "6.4", "6.8", "6.6");
   await shop.fillDepths("Front left", "4.1", "6.0", "6.2");
   await shop.recordWork("Rotation", "41950", "Rotated front to back; front left wears on its inner shoulder.");
-  await expect(tech.getByText("Rotation saved to the driver's logbook, with the tread check.")).toBeVisible();
+  await expect(tech.getByTestId("work-outcome").getByText("Rotation saved to the driver's logbook, with the tread check.")).toBeVisible();
   // The new reading is the tire's depth now (the minimum of its grooves).
   await expect(shop.tire("front_left")).toContainText("4.1 mm");
   await tech.screenshot({ path: `${SCREENS}/technician-logbook-tablet.png`, fullPage: true });

@@ -3,7 +3,7 @@
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { shopPass } from "@/db/schema";
+import { driverProfile, shopPass } from "@/db/schema";
 import { assertVehicleAccess } from "@/db/queries/access";
 import {
   extendPass,
@@ -55,6 +55,19 @@ describe("issuing a pass", () => {
       expect(mail?.text).toContain(`/shop/passes/${id}`);
       expect(mail?.tags).toEqual([{ name: "kind", value: "pass-received" }]);
     }
+  });
+
+  it("the shop's e-mail gives the pass's end in the driver's stored time zone, with the zone's name", async () => {
+    const w = await world();
+    await db
+      .insert(driverProfile)
+      .values({ userId: w.driver.id, timezone: "Europe/Berlin" })
+      .onConflictDoUpdate({ target: driverProfile.userId, set: { timezone: "Europe/Berlin" } });
+    await issuePass({ session: await sessionOf(w.driver), input: { shopId: w.shop.id, vehicleIds: [w.car.vehicle.id], scope: "view", duration: "8h" }, now: T0 });
+    const [mail] = await mailsTo(w.owner.email).then((m) => m.filter((x) => x.subject.includes("shared a logbook")));
+    // T0 + 8 h = 17:00 UTC on Monday 2 March 2026, 18:00 in Berlin (CET, UTC+1, before the EU change on 29 March; Directive 2000/84/EC).
+    expect(mail?.text).toContain("Monday 2 March at 18:00 CET");
+    expect(mail?.text).not.toContain("UTC");
   });
 
   it("refuses another driver's vehicle as not found and writes no pass", async () => {
