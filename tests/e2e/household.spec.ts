@@ -23,6 +23,11 @@ test("Ada invites Tomas to keep a car; Tomas records a check on it; Ada sees it 
   await ada.goto(`/vehicles/${vehicleId}`);
   const adaHome = new HouseholdPages(ada);
   await adaHome.invite(demoAccounts.tomas.email);
+  // An invitation sent by mistake is withdrawn (after a confirmation).
+  await adaHome.invite("neighbour@example.test");
+  await ada.getByTestId("keeper-list").getByRole("listitem").filter({ hasText: "neighbour@example.test" }).getByRole("button", { name: "Withdraw" }).click();
+  await ada.getByRole("alertdialog").getByRole("button", { name: "Withdraw" }).click();
+  await expect(ada.getByTestId("keeper-list")).not.toContainText("neighbour@example.test");
 
   const tomasCtx = await browser.newContext({ viewport: { width: 390, height: 844 } });
   const tomas = await tomasCtx.newPage();
@@ -62,7 +67,16 @@ test("Ada hands a vehicle to a new account, which sees its history; Ada keeps a 
   const vehicleId = await DriverPassesPage.makeVehicle(ada.request, nickname);
   await ada.goto(`/vehicles/${vehicleId}`);
   const adaHome = new HouseholdPages(ada);
+  // A first link is withdrawn; the second one is the one handed over.
+  const first = await adaHome.makeHandOnLink();
+  await ada.reload();
+  await adaHome.confirm("Withdraw the link", "Withdraw");
+  await ada.goto(first);
+  await expect(ada.getByText("This link was withdrawn")).toBeVisible();
+  await ada.goto(`/vehicles/${vehicleId}`);
   const url = await adaHome.makeHandOnLink();
+  await ada.getByRole("button", { name: "Copy the link" }).click();
+  await expect(ada.getByText("Copied.")).toBeVisible();
 
   const buyerCtx = await browser.newContext({ viewport: { width: 390, height: 844 } });
   const buyer = await buyerCtx.newPage();
