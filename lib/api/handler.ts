@@ -28,8 +28,8 @@ type HandlerArgs<P extends Params> = { req: Request; params: P; session: Session
 
 export type RouteOptions = {
   auth?: "required" | "optional";
-  /** What a state-changing request may carry: JSON (default) or a multipart upload. */
-  body?: "json" | "multipart";
+  /** What a state-changing request may carry: JSON (default), a multipart upload, or a zip file (the import). */
+  body?: "json" | "multipart" | "zip";
   /**
    * Skips the same-origin and content-type checks. Only for routes that a
    * browser never calls and that authenticate each request by a signature or
@@ -63,12 +63,14 @@ function mediaType(req: Request): string | null {
   return ct ? ct.split(";")[0].trim().toLowerCase() : null;
 }
 
-function assertBodyType(req: Request, kind: "json" | "multipart"): void {
+const MEDIA_TYPE = { json: "application/json", multipart: "multipart/form-data", zip: "application/zip" } as const;
+
+function assertBodyType(req: Request, kind: keyof typeof MEDIA_TYPE): void {
   const type = mediaType(req);
   // No content type at all is fine for a request without a body (revoke, join…);
   // parseJson() refuses it where a body is needed.
   if (type === null) return;
-  const wanted = kind === "json" ? "application/json" : "multipart/form-data";
+  const wanted = MEDIA_TYPE[kind];
   if (type !== wanted) {
     throw new AppError("unsupported_type", `Send this request as ${wanted}.`, { _form: [`Content-Type must be ${wanted}.`] });
   }

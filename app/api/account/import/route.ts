@@ -42,4 +42,4 @@ export const POST = route(async ({ req, session }) => {
   const bytes = await readCapped(req, IMPORT_MAX_BYTES);
   if (bytes.byteLength === 0) throw new AppError("invalid", "Choose the export's .zip file.", { file: ["Choose a file."] });
   return { imported: await importExport({ userId: session!.user.id, bytes, mode }) };
-});
+}, { body: "zip" });
