@@ -4,6 +4,7 @@
 import Link from "next/link";
 import type { PrintableHistory } from "@/lib/print/history";
 import { buttonVariants } from "@/components/ui/button-variants";
+import { ConditionBadge } from "@/components/ui/condition-badge";
 import { PrintButton } from "./print-button";
 
 export function PrintableHistoryView({ h, paper, backHref, pdfHref, paperHref }: { h: PrintableHistory; paper: "a4" | "letter"; backHref: string; pdfHref?: string; paperHref: (p: "a4" | "letter") => string }) {
@@ -51,7 +52,7 @@ export function PrintableHistoryView({ h, paper, backHref, pdfHref, paperHref }:
         {h.sets.map((s, i) => (
           <div key={i} className="mb-3">
             <h3 className="font-bold">
-              {s.title} — {s.condition}
+              {s.title} — {s.level ? <ConditionBadge condition={s.level} /> : s.condition}
             </h3>
             <p className="text-sm text-asphalt-700">{s.detail}</p>
             <div className="overflow-x-auto">
@@ -70,7 +71,7 @@ export function PrintableHistoryView({ h, paper, backHref, pdfHref, paperHref }:
                       <td className={`${cell} font-mono break-all`}>{t.dotCode}</td>
                       <td className={cell}>{t.made}</td>
                       <td className={cell}>{t.age}</td>
-                      <td className={cell}>{t.condition}</td>
+                      <td className={cell}>{t.level ? <ConditionBadge condition={t.level} /> : t.condition}</td>
                     </tr>
                   ))}
                 </tbody>

@@ -34,6 +34,9 @@ export const vehicleKeeper = pgTable(
   (t) => [
     index("vehicle_keeper_vehicle_idx").on(t.vehicleId),
     index("vehicle_keeper_user_idx").on(t.userId, t.state),
+    // Account deletion sets these to null: indexed so it does not scan the table.
+    index("vehicle_keeper_invited_by_idx").on(t.invitedByUserId),
+    index("vehicle_keeper_ended_by_idx").on(t.endedByUserId),
     // One live arrangement per person and vehicle.
     uniqueIndex("vehicle_keeper_active_uq").on(t.vehicleId, t.userId).where(sql`state = 'active'`),
   ],
@@ -62,7 +65,11 @@ export const vehicleHandOn = pgTable(
     acceptedAt: tz("accepted_at"),
     createdAt: tz("created_at").notNull().defaultNow(),
   },
-  (t) => [index("vehicle_hand_on_vehicle_idx").on(t.vehicleId), index("vehicle_hand_on_from_idx").on(t.fromUserId)],
+  (t) => [
+    index("vehicle_hand_on_vehicle_idx").on(t.vehicleId),
+    index("vehicle_hand_on_from_idx").on(t.fromUserId),
+    index("vehicle_hand_on_accepted_by_idx").on(t.acceptedByUserId),
+  ],
 );
 
 /** A read-only copy of a vehicle's logbook a seller kept when handing it on. */

@@ -3,6 +3,7 @@
 // ages and conditions are the ones the app shows. No prices and no files:
 // the sheet is meant for a shop visit or a buyer.
 import { conditionLabel } from "@/components/ui/condition-badge";
+import type { ConditionLevel } from "@/lib/visual/condition-code";
 import { setTitle } from "@/components/logbook/format";
 import type { VehicleLogbook } from "@/db/queries/logbook";
 import { DEFAULT_PREFS, formatter, type Formatter } from "@/lib/format";
@@ -17,7 +18,9 @@ export type PrintableHistory = {
     title: string;
     detail: string;
     condition: string;
-    tires: { position: string; dotCode: string; made: string; age: string; condition: string }[];
+    /** The level behind `condition`, for the condition code on the printed page (the PDF prints the word). */
+    level: ConditionLevel | null;
+    tires: { position: string; dotCode: string; made: string; age: string; condition: string; level: ConditionLevel | null }[];
   }[];
   lastChecks: { set: string; date: string; odometer: string; by: string; rows: { position: string; inner: string; centre: string; outer: string }[] }[];
   service: { date: string; kind: string; set: string; odometer: string; by: string; notes: string }[];
@@ -52,12 +55,14 @@ export function printableHistory(book: VehicleLogbook, today: string, f: Formatt
         .filter(Boolean)
         .join(" · "),
       condition: s.condition ? conditionLabel(s.condition) : "not enough data",
+      level: s.condition ?? null,
       tires: s.tires.map((t) => ({
         position: POSITION_LABELS[t.position],
         dotCode: t.dotCode ?? "—",
         made: t.dot && t.dot.ok ? `week ${t.dot.week} of ${t.dot.year}` : "unknown",
         age: t.age ? f.age(t.age) : "age unknown",
         condition: t.condition ? conditionLabel(t.condition) : "—",
+        level: t.condition ?? null,
       })),
     })),
     // The latest check of each set that has one, every groove of every tire.

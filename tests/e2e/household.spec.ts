@@ -53,7 +53,7 @@ test("Ada invites Tomas to keep a car; Tomas records a check on it; Ada sees it 
   await expect(ada.getByText("Nobody else keeps it yet.")).toBeVisible();
 
   await tomas.reload();
-  await expect(tomas.getByRole("heading", { name: /could not be found/ })).toBeVisible();
+  await expect(tomas.getByRole("heading", { name: /This page is not here/ })).toBeVisible();
   await adaCtx.close();
   await tomasCtx.close();
 });

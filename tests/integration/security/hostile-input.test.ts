@@ -8,6 +8,11 @@ import { sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import * as passesRoute from "@/app/api/passes/route";
+import * as tireRoute from "@/app/api/tires/[tireId]/route";
+import * as vKeepersRoute from "@/app/api/vehicles/[vehicleId]/keepers/route";
+import * as vHandOnRoute from "@/app/api/vehicles/[vehicleId]/hand-on/route";
+import * as keeperAcceptRoute from "@/app/api/keepers/accept/route";
+import * as handOnAcceptRoute from "@/app/api/hand-ons/accept/route";
 import * as extendRoute from "@/app/api/passes/[passId]/extend/route";
 import * as revokeRoute from "@/app/api/passes/[passId]/revoke/route";
 import * as passChecksRoute from "@/app/api/passes/[passId]/vehicles/[vehicleId]/checks/route";
@@ -71,6 +76,11 @@ const targets: Target[] = [
   T({ name: "POST pass checks", handler: passChecksRoute.POST, method: "POST", actor: "techActive", path: (w) => `/api/passes/${w.passes.active}/vehicles/${w.car.vehicle.id}/checks`, params: (w) => ({ passId: w.passes.active, vehicleId: w.car.vehicle.id }), valid: (w) => ({ setId: w.car.set.id, readings: w.car.tires.map((t) => ({ tireId: t.id, centre: "5.5", pressure: "230" })), pressureUnit: "kpa" }) }),
   T({ name: "POST pass service", handler: passServiceRoute.POST, method: "POST", actor: "techActive", path: (w) => `/api/passes/${w.passes.active}/vehicles/${w.car.vehicle.id}/service`, params: (w) => ({ passId: w.passes.active, vehicleId: w.car.vehicle.id }), valid: (w) => ({ kind: "rotation", notes: "Rotated.", odometer: "42000", odometerUnit: "km", checks: [{ setId: w.car.set.id, method: "gauge", depthUnit: "mm", pressureUnit: "kpa", readings: [{ tireId: w.car.tires[0].id, centre: "6.2" }] }] }) }),
   T({ name: "POST pass sets", handler: passSetsRoute.POST, method: "POST", actor: "techActive", path: (w) => `/api/passes/${w.passes.active}/vehicles/${w.car.vehicle.id}/sets`, params: (w) => ({ passId: w.passes.active, vehicleId: w.car.vehicle.id }), valid: () => ({ kind: "winter", size: "205/55R16", mountNow: false, storageLocation: "Rack 3", tires: (["front_left", "front_right"] as const).map((position) => ({ position, dotCode: "DOT XJ7K ABCD 1224", newDepth: "9" })) }) }),
+  T({ name: "PATCH /api/tires/:id", handler: tireRoute.PATCH, method: "PATCH", actor: "owner", path: (w) => `/api/tires/${w.car.tires[0].id}`, params: (w) => ({ tireId: w.car.tires[0].id }), valid: (w) => ({ dotCode: "DOT XJ7K ABCD 3422", position: w.car.tires[0].position }) }),
+  T({ name: "POST /api/vehicles/:id/keepers", handler: vKeepersRoute.POST, method: "POST", actor: "owner", path: (w) => `/api/vehicles/${w.car.vehicle.id}/keepers`, params: (w) => ({ vehicleId: w.car.vehicle.id }), valid: () => ({ email: "fuzz-keeper@example.test" }) }),
+  T({ name: "POST /api/vehicles/:id/hand-on", handler: vHandOnRoute.POST, method: "POST", actor: "owner", path: (w) => `/api/vehicles/${w.car.vehicle.id}/hand-on`, params: (w) => ({ vehicleId: w.car.vehicle.id }), valid: () => ({ email: "fuzz-buyer@example.test", includeReceipts: false, keepSnapshot: true }) }),
+  T({ name: "POST /api/keepers/accept", handler: keeperAcceptRoute.POST, method: "POST", actor: "otherDriver", path: () => "/api/keepers/accept", params: () => ({}), valid: () => ({ token: "A".repeat(43) }) }),
+  T({ name: "POST /api/hand-ons/accept", handler: handOnAcceptRoute.POST, method: "POST", actor: "otherDriver", path: () => "/api/hand-ons/accept", params: () => ({}), valid: () => ({ token: "A".repeat(43) }) }),
   T({ name: "GET /api/shops", handler: shopsRoute.GET, method: "GET", actor: "owner", path: () => "/api/shops", params: () => ({}) }),
   T({ name: "POST /api/shops", handler: shopsRoute.POST, method: "POST", actor: "otherDriver", path: () => "/api/shops", params: () => ({}), valid: () => ({ name: "Fuzzy Tread Stop", town: "Testford", phone: "+1 555 0100", email: "shop@example.test", about: "We fit tires." }) }),
   T({ name: "PATCH /api/shops/:id", handler: shopRoute.PATCH, method: "PATCH", actor: "shopOwner", path: (w) => `/api/shops/${w.shopA}`, params: (w) => ({ shopId: w.shopA }), valid: () => ({ name: "Ferncastle Wheelhouse", town: "Testford", address: "1 Lane" }) }),
