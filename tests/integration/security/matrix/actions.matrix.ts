@@ -4,28 +4,9 @@ import { setAccountDisabled } from "@/app/(admin)/admin/actions";
 import { saveUnits } from "@/app/(driver)/account/actions";
 import { createFeedLink, saveReminderSettingsAction, turnOffFeed } from "@/app/(driver)/reminders/actions";
 import { changeSubscription } from "@/app/unsubscribe/[token]/actions";
-import { AppError, type ErrorCode } from "@/lib/errors";
 import { signUp } from "../../../support/users";
-import { anySignedIn, everyone, type Actor, type MatrixEntry, type Outcome } from "./types";
-import type { World } from "./world";
-
-const g = globalThis as unknown as { __matrixHeaders?: Headers };
-
-async function asActor<T>(w: World, a: Actor, fn: () => Promise<T>): Promise<T> {
-  const u = w.userOf(a);
-  g.__matrixHeaders = new Headers(u ? { cookie: u.cookie } : {});
-  try {
-    return await fn();
-  } finally {
-    g.__matrixHeaders = undefined;
-  }
-}
-
-/** An action's result as the status a route handler would have answered. */
-function outcome(r: { status: string; code?: ErrorCode }): Outcome {
-  if (r.status === "ok") return { status: 200 };
-  return { status: new AppError(r.code ?? "internal", "").status };
-}
+import { asActor, outcome } from "./act";
+import { anySignedIn, everyone, type MatrixEntry } from "./types";
 
 export const entries: MatrixEntry[] = [
   { file: "app/(driver)/account/actions.ts", exportName: "saveUnits", what: "save one's own units", expect: anySignedIn(200),

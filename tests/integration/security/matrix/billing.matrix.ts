@@ -9,32 +9,16 @@ import * as fakeStripeRoute from "@/app/api/fake/stripe/v1/[...path]/route";
 import * as webhookRoute from "@/app/api/stripe/webhook/route";
 import * as vChecksRoute from "@/app/api/vehicles/[vehicleId]/checks/route";
 import * as vServiceRoute from "@/app/api/vehicles/[vehicleId]/service-entries/route";
-import { AppError, toAppError, type ErrorCode } from "@/lib/errors";
+import { toAppError } from "@/lib/errors";
 import { ctx } from "../../../support/users";
 import { startFakeStripeServer, type FakeStripeServer } from "../../../support/stripe-server";
 import { anySignedIn, everyone, ownerOnly, type Actor, type MatrixEntry, type Outcome } from "./types";
+import { asActor, outcome } from "./act";
 import type { World } from "./world";
 
 type Handler = (req: Request, c: ReturnType<typeof ctx>) => Promise<Response>;
 const status = async (p: Promise<Response>) => ({ status: (await p).status });
 const h = (fn: unknown) => fn as Handler;
-
-const g = globalThis as unknown as { __matrixHeaders?: Headers; __matrixStripe?: FakeStripeServer };
-
-async function asActor<T>(w: World, a: Actor, fn: () => Promise<T>): Promise<T> {
-  const u = w.userOf(a);
-  g.__matrixHeaders = new Headers(u ? { cookie: u.cookie } : {});
-  try {
-    return await fn();
-  } finally {
-    g.__matrixHeaders = undefined;
-  }
-}
-
-function outcome(r: { status: string; code?: ErrorCode }): Outcome {
-  if (r.status === "ok") return { status: 200 };
-  return { status: new AppError(r.code ?? "internal", "").status };
-}
 
 /** The fake's actions throw a not-found error past their gate; anything else that returns passed it. */
 async function gated(fn: () => Promise<unknown>): Promise<Outcome> {
@@ -45,6 +29,8 @@ async function gated(fn: () => Promise<unknown>): Promise<Outcome> {
     return { status: toAppError(err).status };
   }
 }
+
+const g = globalThis as unknown as { __matrixStripe?: FakeStripeServer };
 
 /** The SDK reaches the fake over real HTTP: a loopback server serving its route handlers. */
 async function stripeServer() {
