@@ -39,10 +39,26 @@ export function lockPathFor(dataDir: string) {
   return path.join(dir, `${path.basename(real).replace(/[^\w.-]/g, "_")}-${id}.lock`);
 }
 
+/**
+ * A killed holder whose parent never reaps it (a container whose first
+ * process does not collect orphans) stays a zombie: signal 0 still reaches
+ * it, yet it holds nothing. On Linux its state in /proc says so.
+ */
+function isZombie(pid: number) {
+  try {
+    const stat = fs.readFileSync(`/proc/${pid}/stat`, "utf8");
+    // "pid (comm) S ...": the state follows the last ")" (comm may hold spaces or parentheses).
+    const state = stat.slice(stat.lastIndexOf(")") + 2, stat.lastIndexOf(")") + 3);
+    return state === "Z" || state === "X";
+  } catch {
+    return false;
+  }
+}
+
 function isAlive(pid: number) {
   try {
     process.kill(pid, 0);
-    return true;
+    return !isZombie(pid);
   } catch (err) {
     // EPERM means the process exists but belongs to someone else.
     return (err as NodeJS.ErrnoException).code === "EPERM";

@@ -67,4 +67,23 @@ describe("exclusive lock on the PGlite data folder (PGlite itself takes none)", 
     release();
     expect(fs.existsSync(lockPathFor(dir))).toBe(false);
   });
+
+  it.skipIf(process.platform !== "linux")("takes over a lock whose holder was killed but never reaped (a zombie)", async () => {
+    // A parent that forks a child which exits at once and is never waited for:
+    // the child stays a zombie, which signal 0 still reaches.
+    const parent = spawn("python3", ["-c", "import os,sys,time\npid=os.fork()\nif pid==0: os._exit(0)\nprint(pid, flush=True)\ntime.sleep(30)"], { stdio: ["ignore", "pipe", "inherit"] });
+    try {
+      const zombie = await new Promise<number>((resolve) => parent.stdout.once("data", (d: Buffer) => resolve(Number(d.toString().trim()))));
+      // Wait until the kernel shows it as a zombie.
+      for (let i = 0; i < 50 && !fs.readFileSync(`/proc/${zombie}/stat`, "utf8").includes(") Z "); i++) await new Promise((r) => setTimeout(r, 20));
+      expect(() => process.kill(zombie, 0)).not.toThrow();
+      const dir = path.join(fs.mkdtempSync(path.join(os.tmpdir(), "fourpatch-zombie-")), "data");
+      fs.writeFileSync(lockPathFor(dir), JSON.stringify({ pid: zombie }));
+      const release = acquireDataDirLock(dir);
+      expect(JSON.parse(fs.readFileSync(lockPathFor(dir), "utf8")).pid).toBe(process.pid);
+      release();
+    } finally {
+      parent.kill("SIGKILL");
+    }
+  });
 });
