@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Brand } from "@/components/shell/brand";
-import { AcceptInvitation } from "@/components/shops/accept-invitation";
+import { AcceptLink } from "@/components/ui/accept-link";
 import { Alert } from "@/components/ui/alert";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { getInvitation } from "@/db/queries/shops";
@@ -57,7 +57,7 @@ export default async function JoinPage({ params }: { params: Promise<{ invitatio
         <p>
           Join <strong>{inv.shopName}</strong> as a technician. You will see the logbooks drivers share with the shop, for as long as each pass lasts.
         </p>
-        <AcceptInvitation invitationId={inv.id} shopName={inv.shopName} />
+        <AcceptLink url={`/api/shops/join/${inv.id}`} label={`Join ${inv.shopName}`} pendingLabel="Joining…" goTo="/shop" />
       </div>
     );
   }

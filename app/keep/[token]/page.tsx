@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { Brand } from "@/components/shell/brand";
-import { AcceptLink } from "@/components/household/accept-link";
+import { AcceptLink } from "@/components/ui/accept-link";
 import { Alert } from "@/components/ui/alert";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { keeperInvitation } from "@/db/queries/keepers";

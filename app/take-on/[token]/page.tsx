@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { AcceptLink } from "@/components/household/accept-link";
+import { AcceptLink } from "@/components/ui/accept-link";
 import { HandOnSummaryView } from "@/components/household/hand-on-summary";
 import { Brand } from "@/components/shell/brand";
 import { Alert } from "@/components/ui/alert";

@@ -1,12 +1,14 @@
 "use client";
-// The one button behind a one-time link (co-keeper invitation, hand-on).
+// The one button behind a one-time link: a shop invitation, a co-keeper
+// invitation, a hand-on. It posts (with the link's token, when it has one) and
+// goes on, or shows the refusal and lets the person try again.
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { sendJson } from "@/components/passes/api";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 
-export function AcceptLink({ url, token, label, pendingLabel, goTo }: { url: string; token: string; label: string; pendingLabel: string; goTo: string | ((data: { vehicleId: string }) => string) }) {
+export function AcceptLink({ url, token, label, pendingLabel, goTo }: { url: string; token?: string; label: string; pendingLabel: string; goTo: string }) {
   const router = useRouter();
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -21,13 +23,13 @@ export function AcceptLink({ url, token, label, pendingLabel, goTo }: { url: str
         onClick={async () => {
           setPending(true);
           setError(null);
-          const res = await sendJson<{ vehicleId: string }>(url, { body: { token } });
+          const res = await sendJson(url, { body: token === undefined ? undefined : { token } });
           if (!res.ok) {
             setPending(false);
             setError(res.message);
             return;
           }
-          router.push(typeof goTo === "string" ? goTo : goTo(res.data));
+          router.push(goTo);
           router.refresh();
         }}
       >
