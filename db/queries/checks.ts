@@ -8,7 +8,7 @@ import { AppError, notFound } from "@/lib/errors";
 import { coinDepth, tireDepth, unusualDepth, type CoinResult } from "@/lib/tires";
 import { odometerKmOf, toStoredReadings, todayIso, type TreadCheckRequest } from "@/lib/validation/logbook";
 import { assertVehicleAccess } from "./access";
-import { authorship, guardOdometer, requireOwner } from "./logbook-writes";
+import { authorship, guardOdometer, logDate, requireEditable } from "./logbook-writes";
 
 const coinMm = (c: CoinResult) => {
   const r = coinDepth(c);
@@ -16,19 +16,10 @@ const coinMm = (c: CoinResult) => {
   return r.depthMm;
 };
 
-/** Writes one check inside the caller's transaction (also used by service entries). */
-export async function insertCheck(
-  tx: Transaction,
-  opts: {
-    access: LogbookAccess;
-    vehicleId: string;
-    input: Omit<TreadCheckRequest, "checkedOn" | "odometer"> & { checkedOn: string; odometerKm: number | null };
-    serviceEntryId?: string | null;
-    fieldPrefix?: string;
-  },
-) {
-  const { access, vehicleId, input } = opts;
-  const prefix = opts.fieldPrefix ?? "";
+type CheckInput = Omit<TreadCheckRequest, "checkedOn" | "odometer"> & { checkedOn: string; odometerKm: number | null };
+
+/** The set must be the vehicle's and each reading's tire the set's; returns the tires' depths when new. */
+async function setAndTires(tx: Transaction, vehicleId: string, input: Pick<TreadCheckRequest, "setId" | "readings">, prefix: string) {
   const [set] = await tx
     .select({ id: tireSet.id })
     .from(tireSet)
@@ -43,13 +34,29 @@ export async function insertCheck(
     if (!knownIds.has(r.tireId)) fields[`${prefix}readings.${i}.tireId`] = ["This tire is not part of the set."];
   });
   if (Object.keys(fields).length) throw new AppError("invalid", "Some tires are not part of this set.", fields);
+  return { setId: set.id, known };
+}
 
+/** Writes one check inside the caller's transaction (also used by service entries). */
+export async function insertCheck(
+  tx: Transaction,
+  opts: {
+    access: LogbookAccess;
+    vehicleId: string;
+    input: CheckInput;
+    serviceEntryId?: string | null;
+    fieldPrefix?: string;
+  },
+) {
+  const { access, vehicleId, input } = opts;
+  const prefix = opts.fieldPrefix ?? "";
+  const { setId, known } = await setAndTires(tx, vehicleId, input, prefix);
   const who = authorship(access);
   const [check] = await tx
     .insert(treadCheck)
     .values({
       vehicleId,
-      setId: set.id,
+      setId,
       checkedOn: input.checkedOn,
       odometerKm: input.odometerKm,
       measuredBy: access.kind === "pass" ? "shop" : "driver",
@@ -72,11 +79,18 @@ export async function insertCheck(
  */
 async function guardDepths(
   tx: Transaction,
-  opts: { readings: { tireId: string; innerMm: number | null; centreMm: number | null; outerMm: number | null; approximate: boolean }[]; known: { id: string; newDepthMm: number | null }[]; checkedOn: string; prefix: string },
+  opts: {
+    readings: { tireId: string; innerMm: number | null; centreMm: number | null; outerMm: number | null; approximate: boolean }[];
+    known: { id: string; newDepthMm: number | null }[];
+    checkedOn: string;
+    prefix: string;
+    /** An edit: readings kept exactly as they were stored were asked about (or not) when first saved. */
+    unchanged?: (r: { tireId: string; innerMm: number | null; centreMm: number | null; outerMm: number | null; approximate: boolean }) => boolean;
+  },
 ) {
   const fields: Record<string, string[]> = {};
   for (const [i, r] of opts.readings.entries()) {
-    if (r.approximate) continue;
+    if (r.approximate || opts.unchanged?.(r)) continue;
     const d = tireDepth(r);
     if (!d.ok) continue;
     const grooves = [r.innerMm, r.centreMm, r.outerMm].filter((x): x is number => x != null);
@@ -111,13 +125,62 @@ export async function addTreadCheck({ access, vehicleId, input, today = todayIso
   });
 }
 
-export async function deleteTreadCheck({ access, checkId }: { access: LogbookAccess; checkId: string }) {
-  requireOwner(access, "delete a tread check");
-  if (!/^[0-9a-f-]{36}$/i.test(checkId)) throw notFound("That check");
+/**
+ * The check being changed or deleted, authorised inside the transaction: the
+ * vehicle's drivers, or the shop under the pass the check was recorded under
+ * (the access-log row is written by assertVehicleAccess and rolls back with
+ * any refusal). `vehicleId` is the one in a pass route's path.
+ */
+async function editableCheck(tx: Transaction, opts: { access: LogbookAccess; checkId: string; vehicleId?: string; action: string; verb: string }) {
+  const [row] = await tx.select().from(treadCheck).where(eq(treadCheck.id, opts.checkId)).limit(1);
+  if (!row || (opts.vehicleId && row.vehicleId !== opts.vehicleId)) throw notFound("That check");
+  await assertVehicleAccess(opts.access, { vehicleId: row.vehicleId, write: true, action: opts.action, detail: `Tread check of ${logDate(row.checkedOn)}` }, tx);
+  requireEditable(opts.access, row, opts.verb);
+  return row;
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * Changes a check in place: its set, date, odometer, method, notes and every
+ * reading (replaced as a whole). The same rules as a new check apply, asked
+ * about afresh only for what changed: an odometer lower than what was read
+ * on or before the check's date (the check itself left out), and a reading
+ * deeper than new or than the tire's previous reading.
+ */
+export async function updateTreadCheck({ access, checkId, vehicleId, input, today = todayIso() }: { access: LogbookAccess; checkId: string; vehicleId?: string; input: TreadCheckRequest; today?: string }) {
+  if (!UUID.test(checkId)) throw notFound("That check");
   return db.transaction(async (tx) => {
-    const [row] = await tx.select({ vehicleId: treadCheck.vehicleId }).from(treadCheck).where(eq(treadCheck.id, checkId)).limit(1);
-    if (!row) throw notFound("That check");
-    await assertVehicleAccess(access, { vehicleId: row.vehicleId, write: true, action: "delete_check" }, tx);
+    const row = await editableCheck(tx, { access, checkId, vehicleId, action: "edit_check", verb: "change a tread check" });
+    const { setId, known } = await setAndTires(tx, row.vehicleId, input, "");
+    const checkedOn = input.checkedOn ?? row.checkedOn ?? today;
+    const odometerKm = odometerKmOf(input);
+    if (odometerKm !== row.odometerKm || checkedOn !== row.checkedOn) {
+      await guardOdometer(tx, { vehicleId: row.vehicleId, km: odometerKm, confirmed: input.confirmLowerOdometer, scope: { upTo: checkedOn, excludeCheckId: checkId } });
+    }
+    const before = await tx.select().from(treadReading).where(eq(treadReading.checkId, checkId));
+    await tx.delete(treadReading).where(eq(treadReading.checkId, checkId));
+    await tx
+      .update(treadCheck)
+      .set({ setId, checkedOn, odometerKm, method: input.method, notes: input.notes ?? null })
+      .where(eq(treadCheck.id, checkId));
+    const readings = toStoredReadings(input, coinMm);
+    if (!input.confirmUnusualDepth) {
+      const same = (a: number | null, b: number | null) => (a == null ? b == null : b != null && Math.abs(a - b) < 1e-9);
+      const unchanged = (r: { tireId: string; innerMm: number | null; centreMm: number | null; outerMm: number | null; approximate: boolean }) =>
+        checkedOn === row.checkedOn &&
+        before.some((b) => b.tireId === r.tireId && b.approximate === r.approximate && same(b.innerMm, r.innerMm) && same(b.centreMm, r.centreMm) && same(b.outerMm, r.outerMm));
+      await guardDepths(tx, { readings, known, checkedOn, prefix: "", unchanged });
+    }
+    await tx.insert(treadReading).values(readings.map((r) => ({ checkId, ...r })));
+    return { id: checkId };
+  });
+}
+
+export async function deleteTreadCheck({ access, checkId, vehicleId }: { access: LogbookAccess; checkId: string; vehicleId?: string }) {
+  if (!UUID.test(checkId)) throw notFound("That check");
+  return db.transaction(async (tx) => {
+    await editableCheck(tx, { access, checkId, vehicleId, action: "delete_check", verb: "delete a tread check" });
     await tx.delete(treadCheck).where(eq(treadCheck.id, checkId));
     return { deleted: true };
   });

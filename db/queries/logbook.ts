@@ -82,6 +82,10 @@ export type CheckView = {
   authorName: string | null;
   /** Written by the reader (or, with no author kept, by the owner reading it): shown as "You". */
   byViewer: boolean;
+  /** Recorded under the pass the reader is using: a shop may change or delete only these. */
+  byThisPass: boolean;
+  /** The service entry it was taken with, if any (it shares that entry's date and odometer). */
+  serviceEntryId: string | null;
   notes: string | null;
   readings: ReadingRow[];
 };
@@ -97,6 +101,8 @@ export type ServiceView = {
   shopName: string | null;
   authorName: string | null;
   byViewer: boolean;
+  /** Recorded under the pass the reader is using. */
+  byThisPass: boolean;
 };
 
 export type AttachmentView = {
@@ -178,8 +184,8 @@ export async function getVehicleLogbook({
       .from(treadReading)
       .innerJoin(treadCheck, eq(treadReading.checkId, treadCheck.id))
       .where(opts.setId ? and(eq(treadCheck.vehicleId, vehicleId), eq(treadCheck.setId, opts.setId)) : eq(treadCheck.vehicleId, vehicleId)),
-    pageChecks({ vehicleId, setId: opts.setId, limit, viewer: { userId: access.userId, role } }),
-    opts.setId ? Promise.resolve({ service: [], nextCursor: null }) : pageService({ vehicleId, limit, viewer: { userId: access.userId, role } }),
+    pageChecks({ vehicleId, setId: opts.setId, limit, viewer: { userId: access.userId, role, passId: access.kind === "pass" ? access.passId : undefined } }),
+    opts.setId ? Promise.resolve({ service: [], nextCursor: null }) : pageService({ vehicleId, limit, viewer: { userId: access.userId, role, passId: access.kind === "pass" ? access.passId : undefined } }),
     db
       .select()
       .from(attachment)
@@ -294,7 +300,8 @@ function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {
  * (check date, then entry time, then id). Callers authorise first.
  */
 /** Who reads the page: entries they wrote show as "You" (`byViewer`). */
-type PageViewer = { userId: string; role: VehicleRole };
+type PageViewer = { userId: string; role: VehicleRole; passId?: string };
+const underThisPass = (passId: string | null, viewer?: PageViewer) => !!viewer?.passId && passId === viewer.passId;
 const writtenBy = (authorUserId: string | null, viewer?: PageViewer) => (viewer ? (authorUserId ? authorUserId === viewer.userId : viewer.role === "owner") : false);
 
 export async function pageChecks({ vehicleId, setId, cursor, limit = HISTORY_PAGE, viewer }: { vehicleId: string; setId?: string; cursor?: string | null; limit?: number; viewer?: PageViewer }): Promise<{ checks: CheckView[]; nextCursor: string | null }> {
@@ -338,6 +345,8 @@ export async function pageChecks({ vehicleId, setId, cursor, limit = HISTORY_PAG
       shopName,
       authorName,
       byViewer: writtenBy(k.authorUserId, viewer),
+      byThisPass: underThisPass(k.passId, viewer),
+      serviceEntryId: k.serviceEntryId,
       notes: k.notes,
       readings: byCheck.get(k.id) ?? [],
     })),
@@ -379,6 +388,7 @@ export async function pageService({ vehicleId, cursor, limit = HISTORY_PAGE, vie
       shopName,
       authorName,
       byViewer: writtenBy(s.authorUserId, viewer),
+      byThisPass: underThisPass(s.passId, viewer),
     })),
     nextCursor: rows.length > limit && lastRow ? encodeCursor({ t: lastRow.s.performedOn, c: lastRow.s.createdAt.toISOString(), id: lastRow.s.id }) : null,
   };

@@ -2,9 +2,9 @@ import "server-only";
 // Tire sets: a purchase (the set, its tires, what becomes of the set it
 // replaces and the fitting entry, in one transaction), seasonal swaps,
 // edits and deletion.
-import { and, eq, ne } from "drizzle-orm";
+import { and, eq, inArray, ne, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { attachment, serviceEntry, tire, tireSet } from "@/db/schema";
+import { attachment, serviceEntry, tire, tireSet, treadCheck, treadReading } from "@/db/schema";
 import type { LogbookAccess } from "@/lib/auth/logbook-access";
 import { AppError, notFound } from "@/lib/errors";
 import { decodeDotCode, parseTireSize } from "@/lib/tires";
@@ -210,6 +210,34 @@ export async function updateTire({ access, tireId, input, today = todayIso() }: 
       .where(and(eq(tire.id, tireId), eq(tire.setId, current.setId)))
       .returning({ id: tire.id, position: tire.position, dotCode: tire.dotCode });
     return row;
+  });
+}
+
+/**
+ * Deletes one tire (a tire taken out of a set, or logged by mistake) with
+ * its readings, in one transaction; a check that measured only this tire is
+ * left with nothing and goes too. The set, its other tires and the service
+ * history stay. Drivers of the vehicle only, like the tire's other changes.
+ */
+export async function deleteTire({ access, tireId }: { access: LogbookAccess; tireId: string }) {
+  requireOwner(access, "delete a tire");
+  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(tireId)) throw notFound("That tire");
+  const [found] = await db.select({ setId: tire.setId }).from(tire).where(eq(tire.id, tireId)).limit(1);
+  if (!found) throw notFound("That tire");
+  const vehicleId = await vehicleIdOfSet({ setId: found.setId });
+  return db.transaction(async (tx) => {
+    await assertVehicleAccess(access, { vehicleId, write: true, action: "delete_tire" }, tx);
+    const touched = await tx.select({ checkId: treadReading.checkId }).from(treadReading).where(eq(treadReading.tireId, tireId));
+    const [gone] = await tx.delete(tire).where(and(eq(tire.id, tireId), eq(tire.setId, found.setId))).returning({ id: tire.id });
+    if (!gone) throw notFound("That tire");
+    const checkIds = [...new Set(touched.map((t) => t.checkId))];
+    const emptied = checkIds.length
+      ? await tx
+          .delete(treadCheck)
+          .where(and(inArray(treadCheck.id, checkIds), sql`not exists (select 1 from ${treadReading} where ${treadReading.checkId} = ${treadCheck.id})`))
+          .returning({ id: treadCheck.id })
+      : [];
+    return { deleted: true, readings: touched.length, checksRemoved: emptied.length };
   });
 }
 

@@ -327,26 +327,32 @@ export const odometerKmOf = (v: { odometer?: number; odometerUnit: "km" | "mi" }
 
 // ---------------------------------------------------------------- service entries
 
-export const serviceEntrySchema = z
-  .object({
-    kind: z.enum(SERVICE_KINDS, { error: "Choose the kind of work." }),
-    setId: z.preprocess(blank, id.optional()),
-    performedOn: optDate,
-    odometer: optNumber(0, 3_000_000, "The odometer"),
-    odometerUnit: distanceUnit,
-    confirmLowerOdometer: bool.default(false),
-    cost: optNumber(0, 100_000, "The cost"),
-    notes: optText(1000),
-    /** Tread checks taken during the work, saved with it. */
-    checks: z.array(treadCheckObject.omit({ odometer: true, odometerUnit: true, confirmLowerOdometer: true, checkedOn: true })).max(3).default([]),
-  })
-  .superRefine((v, ctx) => {
-    if (v.performedOn && v.performedOn > todayIso()) ctx.addIssue({ code: "custom", path: ["performedOn"], message: "The date is in the future." });
-    v.checks.forEach((c, i) =>
-      refineCheck({ ...c, odometerUnit: v.odometerUnit, confirmLowerOdometer: v.confirmLowerOdometer } as CheckShape, ctx, ["checks", i]),
-    );
-  });
+const serviceEntryObject = z.object({
+  kind: z.enum(SERVICE_KINDS, { error: "Choose the kind of work." }),
+  setId: z.preprocess(blank, id.optional()),
+  performedOn: optDate,
+  odometer: optNumber(0, 3_000_000, "The odometer"),
+  odometerUnit: distanceUnit,
+  confirmLowerOdometer: bool.default(false),
+  cost: optNumber(0, 100_000, "The cost"),
+  notes: optText(1000),
+  /** Tread checks taken during the work, saved with it. */
+  checks: z.array(treadCheckObject.omit({ odometer: true, odometerUnit: true, confirmLowerOdometer: true, checkedOn: true })).max(3).default([]),
+});
+
+export const serviceEntrySchema = serviceEntryObject.superRefine((v, ctx) => {
+  if (v.performedOn && v.performedOn > todayIso()) ctx.addIssue({ code: "custom", path: ["performedOn"], message: "The date is in the future." });
+  v.checks.forEach((c, i) =>
+    refineCheck({ ...c, odometerUnit: v.odometerUnit, confirmLowerOdometer: v.confirmLowerOdometer } as CheckShape, ctx, ["checks", i]),
+  );
+});
 export type ServiceEntryInput = z.output<typeof serviceEntrySchema>;
+
+/** Changing an entry: the same fields and rules; the checks taken with it are changed as checks. */
+export const serviceEntryUpdateSchema = serviceEntryObject.omit({ checks: true }).superRefine((v, ctx) => {
+  if (v.performedOn && v.performedOn > todayIso()) ctx.addIssue({ code: "custom", path: ["performedOn"], message: "The date is in the future." });
+});
+export type ServiceEntryUpdateInput = z.output<typeof serviceEntryUpdateSchema>;
 
 // ---------------------------------------------------------------- attachments
 
