@@ -3,6 +3,10 @@ import { count, eq } from "drizzle-orm";
 import { db } from "@/db";
 import * as schema from "@/db/schema";
 import { POST as upload } from "@/app/api/vehicles/[vehicleId]/attachments/route";
+import { POST as ownerCheck } from "@/app/api/vehicles/[vehicleId]/checks/route";
+import { POST as ownerService } from "@/app/api/vehicles/[vehicleId]/service-entries/route";
+import { POST as passCheck } from "@/app/api/passes/[passId]/vehicles/[vehicleId]/checks/route";
+import { POST as passService } from "@/app/api/passes/[passId]/vehicles/[vehicleId]/service/route";
 import { ctx, makeShop, request, signUp, type TestUser } from "../../../support/users";
 import { HOUR, insertPass, makeVehicle } from "../../passes/helpers";
 import type { Actor } from "./types";
@@ -78,11 +82,27 @@ export async function buildWorld() {
   if (up.status !== 201) throw new Error(`world: upload answered ${up.status}`);
   const attachmentId = ((await up.json()) as { attachment: { id: string } }).attachment.id;
 
+  // History to change: the owner's own, and what the active pass recorded (the edit and delete routes).
+  const made = async (res: Response) => {
+    if (res.status !== 201) throw new Error(`world: history answered ${res.status}`);
+    const j = (await res.json()) as { id?: string; check?: { id: string }; entry?: { id: string } };
+    return (j.id ?? j.check?.id ?? j.entry?.id)!;
+  };
+  const origin = { origin: "http://fourpatch.test" };
+  const vehicleId = car.vehicle.id;
+  const checkOn = { setId: car.set.id, readings: car.tires.map((t) => ({ tireId: t.id, centre: "5.5" })) };
+  const history = {
+    ownerCheck: await made(await ownerCheck(request(`/api/vehicles/${vehicleId}/checks`, { as: u.owner, body: checkOn, headers: origin }), ctx({ vehicleId }))),
+    ownerEntry: await made(await ownerService(request(`/api/vehicles/${vehicleId}/service-entries`, { as: u.owner, body: { kind: "inspection", checks: [] }, headers: origin }), ctx({ vehicleId }))),
+    passCheck: await made(await passCheck(request(`/api/passes/${passes.active}/vehicles/${vehicleId}/checks`, { as: u.techActive, body: checkOn, headers: origin }), ctx({ passId: passes.active, vehicleId }))),
+    passEntry: await made(await passService(request(`/api/passes/${passes.active}/vehicles/${vehicleId}/service`, { as: u.techActive, body: { kind: "balancing", checks: [] }, headers: origin }), ctx({ passId: passes.active, vehicleId }))),
+  };
+
   const userOf = (a: Actor): TestUser | undefined => (a === "signedOut" ? undefined : u[a]);
   const passFor = (a: Actor): string =>
     a === "techEnded" ? passes.ended : a === "techRevoked" ? passes.revoked : a === "techView" ? passes.view : passes.active;
   /** A same-origin request as the actor (the browser's Origin header included). */
   const req = (url: string, a: Actor, opts: { method?: string; body?: unknown } = {}) =>
     request(url, { as: userOf(a), method: opts.method, body: opts.body, headers: opts.method && opts.method !== "GET" ? { origin: "http://fourpatch.test" } : {} });
-  return { u, shopA, shopB, car, passes, attachmentId, userOf, passFor, req, otherOwner };
+  return { u, shopA, shopB, car, passes, attachmentId, history, userOf, passFor, req, otherOwner };
 }
