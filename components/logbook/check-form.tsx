@@ -7,7 +7,9 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
+import { toast } from "sonner";
 import { Alert } from "@/components/ui/alert";
+import { FormActions } from "@/components/ui/form-actions";
 import { Button } from "@/components/ui/button";
 import { Card, CardTitle } from "@/components/ui/card";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
@@ -29,6 +31,7 @@ export type CheckSetChoice = {
 };
 
 type Reading = { tireId: string; inner: string; centre: string; outer: string; coin: "" | CoinResult; pressure: string };
+export type CheckFormValues = Values;
 type Values = {
   setId: string;
   checkedOn: string;
@@ -53,6 +56,7 @@ export function CheckForm({
   depthUnit,
   pressureUnit,
   preselect,
+  edit,
 }: {
   vehicle: { id: string; nickname: string; odometerUnit: "km" | "mi" };
   sets: CheckSetChoice[];
@@ -60,6 +64,13 @@ export function CheckForm({
   depthUnit: DepthUnit;
   pressureUnit: PressureUnit;
   preselect?: string;
+  /**
+   * Changing a saved check (components/logbook/edit-entry.tsx): its values,
+   * the address it is PATCHed to (the driver's, or a pass route), and what
+   * happens after. The server asks about a lower odometer or unusual depth
+   * as it does for a new check.
+   */
+  edit?: { url: string; values: Values; onDone: () => void; onCancel: () => void };
 }) {
   const f = useFormat();
   const router = useRouter();
@@ -69,7 +80,7 @@ export function CheckForm({
   const form = useForm<Values>({
     resolver: zodResolver(treadCheckSchema) as unknown as Resolver<Values>,
     mode: "onTouched",
-    defaultValues: {
+    defaultValues: edit?.values ?? {
       setId: first?.id ?? "",
       checkedOn: todayIso(),
       odometer: "",
@@ -107,12 +118,18 @@ export function CheckForm({
         async (values) => {
           setError(null);
           try {
-            await api(`/api/vehicles/${vehicle.id}/checks`, { body: values });
+            await api(edit?.url ?? `/api/vehicles/${vehicle.id}/checks`, { method: edit ? "PATCH" : "POST", body: values });
             await Promise.all([
               queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicle.id) }),
               queryClient.invalidateQueries({ queryKey: keys.set(values.setId) }),
+              ...(edit ? [queryClient.invalidateQueries({ queryKey: keys.set(edit.values.setId) })] : []),
               queryClient.invalidateQueries({ queryKey: keys.overview }),
             ]);
+            if (edit) {
+              toast.success(`The tread check of ${f.date(values.checkedOn)} is changed.`);
+              edit.onDone();
+              return;
+            }
             router.push(`/sets/${values.setId}?saved=check`);
             router.refresh();
           } catch (e) {
@@ -139,7 +156,7 @@ export function CheckForm({
               >
                 {sets.map((s) => (
                   <option key={s.id} value={s.id}>
-                    {setTitle(s)} ({s.state === "mounted" ? "on the car" : "stored"})
+                    {setTitle(s)} ({s.state === "mounted" ? "on the car" : s.state === "retired" ? "retired" : "stored"})
                   </option>
                 ))}
               </Select>
@@ -246,11 +263,15 @@ export function CheckForm({
           The readings marked above are right. Save them anyway.
         </label>
       ) : null}
-      <div className="sticky bottom-0 -mx-4 border-t border-asphalt-200 bg-white/95 px-4 py-3 backdrop-blur sm:static sm:mx-0 sm:border-0 sm:bg-transparent sm:p-0">
-        <Button type="submit" size="lg" className="w-full sm:w-auto" pending={formState.isSubmitting} pendingLabel="Saving the check…">
-          Save the check
-        </Button>
-      </div>
+      {edit ? (
+        <FormActions pending={formState.isSubmitting} submitLabel="Save the changes" pendingLabel="Saving the changes…" onCancel={edit.onCancel} />
+      ) : (
+        <div className="sticky bottom-0 -mx-4 border-t border-asphalt-200 bg-white/95 px-4 py-3 backdrop-blur sm:static sm:mx-0 sm:border-0 sm:bg-transparent sm:p-0">
+          <Button type="submit" size="lg" className="w-full sm:w-auto" pending={formState.isSubmitting} pendingLabel="Saving the check…">
+            Save the check
+          </Button>
+        </div>
+      )}
     </form>
   );
 }

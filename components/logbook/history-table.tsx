@@ -13,7 +13,7 @@ import {
   type PaginationState,
   type SortingState,
 } from "@tanstack/react-table";
-import { ArrowDown, ArrowUp, ArrowUpDown, Trash2 } from "lucide-react";
+import { ArrowDown, ArrowUp, ArrowUpDown, Pencil, Trash2 } from "lucide-react";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -77,7 +77,18 @@ export function historyRows(book: VehicleLogbook, depthUnit: DepthUnit, f: Forma
  * the tab spins at full CPU. The React Compiler lint reports the hook as an
  * incompatible library, so nothing here may rely on the compiler memoising.
  */
-export function HistoryTable({ rows, distanceUnit, onDelete }: { rows: HistoryRow[]; distanceUnit: DistanceUnit; onDelete?: (row: HistoryRow) => Promise<void> }) {
+export function HistoryTable({
+  rows,
+  distanceUnit,
+  onDelete,
+  onEdit,
+}: {
+  rows: HistoryRow[];
+  distanceUnit: DistanceUnit;
+  onDelete?: (row: HistoryRow) => Promise<void>;
+  /** Opens the row's edit form (kept stable by the caller, like onDelete). */
+  onEdit?: (row: HistoryRow) => void;
+}) {
   const [sorting, setSorting] = useState<SortingState>([{ id: "date", desc: true }]);
   const [typeFilter, setTypeFilter] = useState("");
   const [search, setSearch] = useState("");
@@ -107,6 +118,12 @@ export function HistoryTable({ rows, distanceUnit, onDelete }: { rows: HistoryRo
               cell: (c) => {
                 const row = c.row.original;
                 return (
+                  <div className="flex">
+                  {onEdit ? (
+                    <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Change: ${row.type}, ${f.date(row.date)}`} onClick={() => onEdit(row)}>
+                      <Pencil aria-hidden className="size-4" />
+                    </button>
+                  ) : null}
                   <ConfirmDialog
                     trigger={
                       <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Delete: ${row.type}, ${f.date(row.date)}`}>
@@ -117,19 +134,21 @@ export function HistoryTable({ rows, distanceUnit, onDelete }: { rows: HistoryRo
                     description={
                       <p>
                         {row.type} of {f.date(row.date)}
-                        {row.details ? ` (${row.details})` : ""} leaves the history, and its readings leave the wear chart. This cannot be undone.
+                        {row.details ? ` (${row.details})` : ""} leaves the history
+                        {row.id.startsWith("c-") ? ", and its readings leave the wear chart and the projections" : "; tread checks taken with it stay as checks of their own, and its files are deleted"}. This cannot be undone.
                       </p>
                     }
                     confirmLabel="Delete the entry"
                     onConfirm={() => onDelete(row)}
                   />
+                  </div>
                 );
               },
             } satisfies ColumnDef<HistoryRow>,
           ]
         : []),
     ],
-    [distanceUnit, f, onDelete],
+    [distanceUnit, f, onDelete, onEdit],
   );
   // eslint-disable-next-line react-hooks/incompatible-library -- the inputs are stable by hand (see above); the compiler is not enabled
   const table = useReactTable({

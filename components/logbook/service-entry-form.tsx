@@ -1,5 +1,7 @@
 "use client";
-// A driver's own service entry (rotation, balancing, repair…) on the vehicle page.
+// A service entry (rotation, balancing, repair…): a driver's new one on the
+// vehicle page, or a saved one changed (by the driver, or by a shop under the
+// pass that recorded it) through `edit`.
 import { FormActions } from "@/components/ui/form-actions";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
@@ -8,24 +10,45 @@ import { useForm, type Path, type Resolver } from "react-hook-form";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { SERVICE_KIND_LABELS, SERVICE_KINDS, serviceEntrySchema, todayIso } from "@/lib/validation/logbook";
+import { toast } from "sonner";
+import { useFormat } from "@/components/format/format-provider";
+import { SERVICE_KIND_LABELS, SERVICE_KINDS, serviceEntrySchema, serviceEntryUpdateSchema, todayIso } from "@/lib/validation/logbook";
 import { api, ApiError, keys } from "./api";
 
+export type ServiceFormValues = Values;
 type Values = { kind: (typeof SERVICE_KINDS)[number]; setId: string; performedOn: string; odometer: string; odometerUnit: "km" | "mi"; confirmLowerOdometer: boolean; cost: string; notes: string };
 
-export function ServiceEntryForm({ vehicleId, sets, odometerUnit }: { vehicleId: string; sets: { id: string; name: string }[]; odometerUnit: "km" | "mi" }) {
+export function ServiceEntryForm({
+  vehicleId,
+  sets,
+  odometerUnit,
+  edit,
+}: {
+  vehicleId: string;
+  sets: { id: string; name: string }[];
+  odometerUnit: "km" | "mi";
+  /** Changing a saved entry: its values, the address it is PATCHed to, and what happens after. */
+  edit?: { url: string; values: Values; onDone: () => void; onCancel: () => void };
+}) {
   const queryClient = useQueryClient();
-  const [open, setOpen] = useState(false);
+  const f = useFormat();
+  const [open, setOpen] = useState(!!edit);
   const form = useForm<Values>({
-    resolver: zodResolver(serviceEntrySchema) as unknown as Resolver<Values>,
-    defaultValues: { kind: "rotation", setId: sets[0]?.id ?? "", performedOn: todayIso(), odometer: "", odometerUnit, confirmLowerOdometer: false, cost: "", notes: "" },
+    resolver: zodResolver(edit ? serviceEntryUpdateSchema : serviceEntrySchema) as unknown as Resolver<Values>,
+    defaultValues: edit?.values ?? { kind: "rotation", setId: sets[0]?.id ?? "", performedOn: todayIso(), odometer: "", odometerUnit, confirmLowerOdometer: false, cost: "", notes: "" },
   });
   const save = useMutation({
-    mutationFn: (v: unknown) => api(`/api/vehicles/${vehicleId}/service-entries`, { body: v }),
-    onSuccess: async () => {
+    mutationFn: (v: unknown) => api(edit?.url ?? `/api/vehicles/${vehicleId}/service-entries`, { method: edit ? "PATCH" : "POST", body: v }),
+    onSuccess: async (_data, v) => {
+      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
+      if (edit) {
+        const values = v as Values;
+        toast.success(`${SERVICE_KIND_LABELS[values.kind]} of ${f.date(values.performedOn || edit.values.performedOn)} is changed.`);
+        edit.onDone();
+        return;
+      }
       setOpen(false);
       form.reset();
-      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
     },
     onError: (e) => {
       if (e instanceof ApiError) for (const [k, m] of Object.entries(e.fields)) form.setError(k as Path<Values>, { message: m[0] });
@@ -85,7 +108,7 @@ export function ServiceEntryForm({ vehicleId, sets, odometerUnit }: { vehicleId:
       <Field label="Notes (optional)" error={e("notes")}>
         {({ id, describedBy }) => <Textarea id={id} aria-describedby={describedBy} {...form.register("notes")} />}
       </Field>
-      <FormActions pending={save.isPending} submitLabel="Save the entry" pendingLabel="Saving…" onCancel={() => setOpen(false)} />
+      <FormActions pending={save.isPending} submitLabel={edit ? "Save the changes" : "Save the entry"} pendingLabel="Saving…" onCancel={edit ? edit.onCancel : () => setOpen(false)} />
     </form>
   );
 }

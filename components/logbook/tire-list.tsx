@@ -5,6 +5,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { toast } from "sonner";
 import { Alert } from "@/components/ui/alert";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Button } from "@/components/ui/button";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { TireTreadProfile } from "@/components/visual/tread-profile";
@@ -109,6 +110,7 @@ export const PATTERN_LABEL: Record<NonNullable<TireView["pattern"]>["kind"], str
 
 function TireEditor({ tire, edit }: { tire: TireView; edit: { vehicleId: string; setId: string; kind: SetKind } }) {
   const queryClient = useQueryClient();
+  const f = useFormat();
   const id = useId();
   const [open, setOpen] = useState(false);
   const [code, setCode] = useState(tire.dotCode ?? "");
@@ -162,6 +164,36 @@ function TireEditor({ tire, edit }: { tire: TireView; edit: { vehicleId: string;
         )}
       </Field>
       <FormActions pending={save.isPending} submitLabel="Save the tire" onCancel={() => setOpen(false)} />
+      <div className="border-t border-groove-200 pt-2">
+        <ConfirmDialog
+          trigger={
+            <Button type="button" size="sm" variant="ghost">
+              Delete this tire<span className="sr-only"> ({POSITION_LABELS[tire.position].toLowerCase()})</span>
+            </Button>
+          }
+          title={`Delete the ${POSITION_LABELS[tire.position].toLowerCase()} tire?`}
+          description={
+            <>
+              <p>
+                The tire{tire.dotCode ? ` ${tire.dotCode}` : ""} leaves the set, and its{" "}
+                {f.count(tire.series.length, { one: "tread reading goes", other: "tread readings go" })} with it: they leave the wear chart and the
+                projections. A tread check that measured only this tire is deleted too.
+              </p>
+              <p className="mt-2">The set&apos;s other tires, their readings and the service history stay. This cannot be undone.</p>
+            </>
+          }
+          confirmLabel="Delete the tire and its readings"
+          onConfirm={async () => {
+            await api(`/api/tires/${tire.id}`, { method: "DELETE" });
+            toast.success(`The ${POSITION_LABELS[tire.position].toLowerCase()} tire is deleted.`);
+            await Promise.all([
+              queryClient.invalidateQueries({ queryKey: keys.vehicle(edit.vehicleId) }),
+              queryClient.invalidateQueries({ queryKey: keys.set(edit.setId) }),
+              queryClient.invalidateQueries({ queryKey: keys.overview }),
+            ]);
+          }}
+        />
+      </div>
     </form>
   );
 }

@@ -7,7 +7,7 @@ import { VehicleSharing } from "@/components/household/vehicle-sharing";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
-import { useCallback, useMemo, useState } from "react";
+import { useCallback, useMemo, useRef, useState } from "react";
 import { toast } from "sonner";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Alert } from "@/components/ui/alert";
@@ -26,6 +26,7 @@ import { api, ApiError, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 import { HistoryTable, historyRows, type HistoryRow } from "./history-table";
+import { EditCheck, EditServiceEntry } from "./edit-entry";
 import { ServiceEntryForm } from "./service-entry-form";
 import { TireList } from "./tire-list";
 import { useOlderHistory } from "./use-older-history";
@@ -80,6 +81,26 @@ export function VehicleLogbookView({
     },
     [f, id, queryClient],
   );
+  // The entry being changed: its form opens above the table and takes the focus.
+  const [editing, setEditing] = useState<HistoryRow | null>(null);
+  const editRef = useRef<HTMLDivElement>(null);
+  const editEntry = useCallback((row: HistoryRow) => {
+    setEditing(row);
+    requestAnimationFrame(() => {
+      editRef.current?.scrollIntoView({ block: "start", behavior: "smooth" });
+      editRef.current?.focus({ preventScroll: true });
+    });
+  }, []);
+  const editingId = editing ? editing.id.slice(2) : null;
+  const editingCheck = editing?.id.startsWith("c-") ? book.checks.find((c) => c.id === editingId) : undefined;
+  const editingEntry = editing?.id.startsWith("s-") ? book.service.find((s) => s.id === editingId) : undefined;
+  const editCommon = {
+    vehicle: { id, nickname: v.nickname, odometerUnit: distanceUnit },
+    sets: book.sets,
+    depthUnit,
+    pressureUnit: book.viewer.pressureUnit,
+    onDone: () => setEditing(null),
+  };
 
   return (
     <>
@@ -128,7 +149,18 @@ export function VehicleLogbookView({
         {canManage ? (
           <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
         ) : null}
-        <HistoryTable rows={rows} distanceUnit={distanceUnit} onDelete={canManage ? deleteEntry : undefined} />
+        {editing && (editingCheck || editingEntry) ? (
+          <div ref={editRef} tabIndex={-1} className="scroll-mt-24 outline-none" data-testid="edit-entry">
+            <Card className="space-y-3 border-groove-300">
+              <h3 className="text-lg font-bold">
+                Change the {editing.type.toLowerCase()} of {f.date(editing.date)}
+              </h3>
+              {editingCheck ? <EditCheck key={editingCheck.id} check={editingCheck} url={`/api/checks/${editingCheck.id}`} {...editCommon} /> : null}
+              {editingEntry ? <EditServiceEntry key={editingEntry.id} entry={editingEntry} url={`/api/service-entries/${editingEntry.id}`} {...editCommon} /> : null}
+            </Card>
+          </div>
+        ) : null}
+        <HistoryTable rows={rows} distanceUnit={distanceUnit} onDelete={canManage ? deleteEntry : undefined} onEdit={canManage ? editEntry : undefined} />
         {canManage ? <OlderHistory book={book} /> : null}
       </section>
 

@@ -3,6 +3,7 @@ import { Paperclip, PencilLine } from "lucide-react";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
+import { PassEntryControls } from "@/components/passes/pass-entry-controls";
 import { ShopFittedSetForm } from "@/components/passes/shop-fitted-set-form";
 import { ShopServiceForm } from "@/components/passes/shop-service-form";
 import { TimeLeft } from "@/components/passes/time-left";
@@ -53,6 +54,8 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
   const others = logbook.sets.filter((s) => s.state !== "mounted");
   const canAdd = access.scope === "view_add";
   const onCar = mounted[0] ?? null;
+  // What this pass recorded can be changed or deleted while the pass lets the shop add.
+  const controls = { passId, vehicle: { id: v.id, nickname: v.nickname, odometerUnit: v.odometerUnit }, sets: logbook.sets, depthUnit, pressureUnit: logbook.viewer.pressureUnit };
 
   return (
     <div className="pb-24">
@@ -145,6 +148,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
                 </p>
                 <p className="text-sm text-asphalt-600">{s.shopName ? `${s.shopName}${s.authorName ? `, ${s.authorName}` : ""}` : "Logged by the driver"}</p>
                 {s.notes ? <p className="text-sm text-asphalt-700">{s.notes}</p> : null}
+                {canAdd && s.byThisPass ? <PassEntryControls {...controls} entry={s} /> : null}
               </li>
             ))}
           </ul>
@@ -159,6 +163,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
                   {f.date(c.checkedOn)} · {f.count(c.readings.length, { one: "tire", other: "tires" })} · {c.method === "coin" ? "coin (approximate)" : "gauge"}
                 </p>
                 <p className="text-sm text-asphalt-600">{c.measuredBy === "shop" ? `${c.shopName ?? "A shop"}${c.authorName ? `, ${c.authorName}` : ""}` : "Measured by the driver"}</p>
+                {canAdd && c.byThisPass ? <PassEntryControls {...controls} check={c} /> : null}
               </li>
             ))}
           </ul>
