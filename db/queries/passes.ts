@@ -20,7 +20,8 @@ import { sendEmail } from "@/lib/email/send";
 import { appUrl } from "@/lib/env";
 import { AppError, forbidden, notFound } from "@/lib/errors";
 import { decodeCursor, DEFAULT_PAGE, encodeCursor, timeIdCursor } from "@/lib/api/cursor";
-import { prefsFrom } from "@/lib/format";
+import { formatter, prefsFrom, type FormatPrefs } from "@/lib/format";
+import { requestPrefs } from "@/lib/format/server";
 import {
   durationMs,
   MAX_PASS_DAYS,
@@ -71,7 +72,7 @@ async function passVehicles(passIds: string[]) {
  * `assertVehicleAccess` then checks the vehicle, the end again, the scope,
  * and writes the access-log row.
  */
-export async function resolvePassAccess({ session, passId, now }: { session: Session | null; passId: string; now: Date }): Promise<LogbookAccess & { kind: "pass" }> {
+export async function resolvePassAccess({ session, passId, now, prefs }: { session: Session | null; passId: string; now: Date; prefs?: FormatPrefs }): Promise<LogbookAccess & { kind: "pass" }> {
   const s = requireSession(session);
   if (!UUID.test(passId)) throw notFound("That pass");
   const [row] = await db
@@ -89,10 +90,12 @@ export async function resolvePassAccess({ session, passId, now }: { session: Ses
   if (state === "revoked") {
     throw new AppError("pass_ended", "The driver withdrew this pass, so the logbook is closed to the shop. Entries already saved stay in the driver's logbook.");
   }
+  // Said to the technician: in their own zone and locale (the request's, unless given).
   if (state === "expired") {
-    throw new AppError("pass_ended", `This pass ended on ${formatWhen(row.pass.endsAt)}. Ask the driver for a new pass to go on.`);
+    const f = formatter(prefs ?? (await requestPrefs()));
+    throw new AppError("pass_ended", `This pass ended on ${f.dateTime(row.pass.endsAt)}. Ask the driver for a new pass to go on.`);
   }
-  if (state === "scheduled") throw forbidden(`This pass starts on ${formatWhen(row.pass.startsAt)}.`);
+  if (state === "scheduled") throw forbidden(`This pass starts on ${formatter(prefs ?? (await requestPrefs())).dateTime(row.pass.startsAt)}.`);
   // A driver's account disabled by an operator: its passes stop with it.
   if (row.driverBanned) throw new AppError("pass_ended", "This pass has stopped: the driver's account is disabled.");
   const vehicles = await db.select({ id: shopPassVehicle.vehicleId }).from(shopPassVehicle).where(eq(shopPassVehicle.passId, passId));

@@ -5,6 +5,7 @@ import { Brand } from "@/components/shell/brand";
 import { listFakeEmails } from "@/db/queries/outbox";
 import { checkDevFakeRequest } from "@/lib/dev-fakes";
 import { usingFakeEmail } from "@/lib/env";
+import { viewerFormat } from "@/lib/format/server";
 
 export const dynamic = "force-dynamic";
 export const metadata = { title: "Outbox (local e-mail fake)" };
@@ -14,7 +15,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
   // Only with development fakes on, and only for a loopback client or an operator (lib/dev-fakes.ts).
   if (!usingFakeEmail() || !(await checkDevFakeRequest(await headers())).ok) notFound();
   const { to } = await searchParams;
-  const messages = await listFakeEmails({ to });
+  const [messages, f] = await Promise.all([listFakeEmails({ to }), viewerFormat()]);
   return (
     <main className="mx-auto max-w-4xl px-4 py-8">
       <Brand />
@@ -34,7 +35,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
             <Link href={`/dev/outbox/${m.id}`} className="block p-4 no-underline hover:bg-asphalt-50">
               <span className="block font-semibold text-asphalt-900">{m.subject}</span>
               <span className="block text-sm text-asphalt-600">
-                to {m.toAddresses.join(", ")} · {m.createdAt.toISOString().replace("T", " ").slice(0, 16)} UTC
+                to {m.toAddresses.join(", ")} · {f.dateTime(m.createdAt)}
               </span>
             </Link>
           </li>

@@ -6,12 +6,11 @@ import { listFakeObjects } from "@/db/queries/fake-stripe";
 import { formatMoney } from "@/lib/billing/config";
 import { fakeStripeAllowed } from "@/lib/billing/fake-gate";
 import { fakeWebhookUrl } from "@/lib/billing/fake/engine";
+import { viewerFormat } from "@/lib/format/server";
 import { advanceAction, failNextAction, redeliverAction } from "./actions";
 
 export const dynamic = "force-dynamic";
 export const metadata = { title: "Payments fake (developer page)", robots: { index: false } };
-
-const utc = (s: number) => new Date(s * 1000).toISOString().replace("T", " ").slice(0, 16) + " UTC";
 
 type Sub = { id: string; customer: string; status: string; cancel_at_period_end: boolean; items: { data: { price: { unit_amount: number; currency: string; recurring: { interval: string } }; current_period_end: number }[] } };
 
@@ -20,6 +19,9 @@ type Sub = { id: string; customer: string; status: string; cancel_at_period_end:
 // its life (renewal, failed renewal, the end of a cancelled period).
 export default async function FakeStripePage() {
   if (!(await fakeStripeAllowed(await headers()))) notFound();
+  // Moments in the viewer's own zone (lib/format), like every other page.
+  const f = await viewerFormat();
+  const when = (s: number) => f.dateTime(s * 1000);
   const [customers, subs, events] = await Promise.all([
     listFakeObjects({ type: "customer", limit: 100 }),
     listFakeObjects({ type: "subscription", limit: 100 }),
@@ -53,7 +55,7 @@ export default async function FakeStripePage() {
                 </p>
                 <p className="text-sm text-asphalt-700">
                   {s.status}
-                  {s.cancel_at_period_end ? " · cancels at period end" : ""} · {formatMoney(item.price.unit_amount, item.price.currency)} per {item.price.recurring.interval} · period ends {utc(item.current_period_end)}
+                  {s.cancel_at_period_end ? " · cancels at period end" : ""} · {formatMoney(item.price.unit_amount, item.price.currency)} per {item.price.recurring.interval} · period ends {when(item.current_period_end)}
                 </p>
                 {s.status !== "canceled" ? (
                   <div className="flex flex-wrap items-center gap-3">
@@ -101,7 +103,7 @@ export default async function FakeStripePage() {
           {events.map((e) => (
             <li key={e.id} className="flex flex-wrap items-center justify-between gap-2 p-3 text-sm">
               <span className="min-w-0 break-all">
-                <span className="font-semibold">{String(e.data.type)}</span> · <span className="font-mono">{e.id}</span> · {utc(Number(e.data.created))} · delivery:{" "}
+                <span className="font-semibold">{String(e.data.type)}</span> · <span className="font-mono">{e.id}</span> · {when(Number(e.data.created))} · delivery:{" "}
                 {String(e.fakeFlags.delivery ?? "—")}
               </span>
               <form action={redeliverAction}>

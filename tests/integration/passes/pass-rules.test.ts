@@ -100,6 +100,11 @@ describe("the clock decides", () => {
       code: "pass_ended",
       message: expect.stringMatching(/ended on .* Ask the driver for a new pass/),
     });
+    // Said in the technician's own zone and locale, not UTC: 13:00 UTC on 2 March 2026 is 14:00 CET in Berlin
+    // (UTC+1 before the EU change on 29 March; Directive 2000/84/EC).
+    const inBerlin = resolvePassAccess({ session: tech, passId: id, now: at(5), prefs: { locale: "en-GB", timeZone: "Europe/Berlin" } });
+    await expect(inBerlin).rejects.toMatchObject({ code: "pass_ended", message: expect.stringContaining("2 Mar 2026, 14:00 CET") });
+    await expect(inBerlin).rejects.toMatchObject({ message: expect.not.stringContaining("UTC") });
     // An access resolved before the end is still refused once the end passes (a page left open).
     await expect(assertVehicleAccess(access, { vehicleId: w.car.vehicle.id, action: "read logbook", now: at(4) })).rejects.toMatchObject({ code: "pass_ended" });
   });

@@ -6,6 +6,7 @@ import { TestCards } from "@/components/billing/fake/test-cards";
 import { getFakeObject } from "@/db/queries/fake-stripe";
 import { formatMoney } from "@/lib/billing/config";
 import { fakeStripeAllowed } from "@/lib/billing/fake-gate";
+import { viewerFormat } from "@/lib/format/server";
 import { payInvoiceAction } from "../../actions";
 
 export const dynamic = "force-dynamic";
@@ -19,14 +20,15 @@ export default async function FakeInvoicePage({ params }: { params: Promise<{ in
   const row = await getFakeObject({ id: invoiceId, type: "invoice" });
   if (!row) notFound();
   const i = row.data as { number: string; status: string; amount_due: number; amount_paid: number; currency: string; period_start: number; period_end: number };
-  const day = (s: number) => new Date(s * 1000).toISOString().slice(0, 10);
+  const f = await viewerFormat();
+  const day = (s: number) => f.dateOf(s * 1000);
   return (
     <main className="mx-auto max-w-md space-y-5 px-4 py-8">
       <p className="rounded bg-asphalt-900 px-3 py-1 text-center text-xs font-semibold uppercase tracking-wide text-white">Local payment fake · test mode · no real money</p>
       <div>
         <h1 className="text-2xl font-bold">Invoice {i.number}</h1>
         <p className="text-asphalt-800">
-          Fourpatch Plus, {day(i.period_start)} to {day(i.period_end)} (UTC)
+          Fourpatch Plus, {day(i.period_start)} to {day(i.period_end)}
         </p>
         <p className="text-lg font-semibold">
           {formatMoney(i.status === "paid" ? i.amount_paid : i.amount_due, i.currency)} · {i.status === "paid" ? "Paid" : i.status === "open" ? "Payment due" : i.status}
