@@ -76,8 +76,8 @@ test("a technician on a phone changes the check the shop recorded under its pass
   const techCtx = await browser.newContext({ viewport: { width: 390, height: 844 } });
   const tech = await techCtx.newPage();
   await new SessionPages(tech).signInAndLand(demoAccounts.jo.email, "/shop");
-  const book = (await (await tech.request.get(`/api/passes/${pass.id}/vehicles/${vehicleId}`)).json()) as { sets: { id: string; tires: { id: string }[] }[] };
-  const set = book.sets[0];
+  const { logbook } = (await (await tech.request.get(`/api/passes/${pass.id}/vehicles/${vehicleId}`)).json()) as { logbook: { sets: { id: string; tires: { id: string }[] }[] } };
+  const set = logbook.sets[0];
   await post(tech.request, `/api/passes/${pass.id}/vehicles/${vehicleId}/checks`, { setId: set.id, readings: set.tires.map((t) => ({ tireId: t.id, centre: "6.1" })) });
 
   await tech.goto(`/shop/passes/${pass.id}/${vehicleId}`);
