@@ -5,7 +5,7 @@ import dynamic from "next/dynamic";
 import type { SetKind } from "@/lib/tires";
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
-import { useState } from "react";
+import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Alert } from "@/components/ui/alert";
 import { buttonVariants } from "@/components/ui/button-variants";
@@ -20,6 +20,7 @@ import { api, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 import { SetSettings } from "./set-settings";
+import { EditCheck } from "./edit-entry";
 import { TireList } from "./tire-list";
 // The chart library is most of this page's JavaScript: it loads after the
 // page is shown, into a box of the chart's own height (no layout shift).
@@ -38,6 +39,10 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
   const state = s.state === "mounted" ? "on the car" : s.state === "stored" ? `stored${s.storageLocation ? ` at ${s.storageLocation}` : ""}` : "retired";
   const positionOf = new Map(s.tires.map((t) => [t.id, POSITION_LABELS[t.position]]));
   const [showAll, setShowAll] = useState(false);
+  // A check being changed: the recording form, filled in, above the readings.
+  const [editingId, setEditingId] = useState<string | null>(null);
+  const editRef = useRef<HTMLDivElement>(null);
+  const editing = d.checks.find((c) => c.id === editingId);
 
   return (
     <>
@@ -115,6 +120,23 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
         <h2 id="readings-h" className="text-xl font-bold">
           Readings
         </h2>
+        {editing ? (
+          <div ref={editRef} tabIndex={-1} className="scroll-mt-24 outline-none" data-testid="edit-entry">
+            <Card className="space-y-3 border-groove-300">
+              <h3 className="text-lg font-bold">Change the tread check of {f.date(editing.checkedOn)}</h3>
+              <EditCheck
+                key={editing.id}
+                check={editing}
+                url={`/api/checks/${editing.id}`}
+                vehicle={{ id: d.vehicle.id, nickname: d.vehicle.nickname, odometerUnit: distanceUnit }}
+                sets={[s]}
+                depthUnit={depthUnit}
+                pressureUnit={d.viewer.pressureUnit}
+                onDone={() => setEditingId(null)}
+              />
+            </Card>
+          </div>
+        ) : null}
         {d.checks.length === 0 ? (
           <p className="text-asphalt-600">No checks yet.</p>
         ) : (
@@ -132,9 +154,28 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
               </thead>
               <tbody>
                 {(showAll ? d.checks : d.checks.slice(0, 3)).flatMap((c) =>
-                  c.readings.map((r) => (
+                  c.readings.map((r, i) => (
                     <tr key={`${c.id}-${r.tireId}`} className="border-t border-asphalt-200">
-                      <td className="px-3 py-2 whitespace-nowrap">{f.date(c.checkedOn)}</td>
+                      <td className="px-3 py-2 whitespace-nowrap">
+                        {f.date(c.checkedOn)}
+                        {i === 0 ? (
+                          <Button
+                            type="button"
+                            size="sm"
+                            variant="ghost"
+                            className="ml-1"
+                            onClick={() => {
+                              setEditingId(c.id);
+                              requestAnimationFrame(() => {
+                                editRef.current?.scrollIntoView({ block: "start", behavior: "smooth" });
+                                editRef.current?.focus({ preventScroll: true });
+                              });
+                            }}
+                          >
+                            Change<span className="sr-only"> the tread check of {f.date(c.checkedOn)}</span>
+                          </Button>
+                        ) : null}
+                      </td>
                       <td className="hidden px-3 py-2 whitespace-nowrap md:table-cell">{f.distance(c.odometerKm, distanceUnit)}</td>
                       <td className="px-3 py-2">{positionOf.get(r.tireId) ?? "—"}</td>
                       <td className="px-3 py-2">
