@@ -118,7 +118,7 @@ export function HistoryTable({
               cell: (c) => {
                 const row = c.row.original;
                 return (
-                  <div className="flex">
+                  <div className="flex flex-col md:flex-row">
                   {onEdit ? (
                     <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Change: ${row.type}, ${f.date(row.date)}`} onClick={() => onEdit(row)}>
                       <Pencil aria-hidden className="size-4" />
