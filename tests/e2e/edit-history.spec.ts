@@ -97,3 +97,17 @@ test("a technician on a phone changes the check the shop recorded under its pass
   await techCtx.close();
   await driverCtx.close();
 });
+
+test("the dev outbox gives each message's time in the viewer's zone, not UTC", async ({ browser }) => {
+  const ctx = await browser.newContext({ timezoneId: "Europe/Berlin", locale: "de-DE" });
+  const page = await ctx.newPage();
+  await page.goto("/sign-in");
+  // The browser tells the server its zone once (a cookie); the next page is drawn in it.
+  await expect.poll(async () => (await ctx.cookies()).find((c) => c.name === "fp_tz")?.value).toBe("Europe%2FBerlin");
+  await page.goto("/dev/outbox");
+  const first = page.getByRole("listitem").first();
+  // December in Berlin is CET, "MEZ" in German (EU summer time ends on the last Sunday of October, Directive 2000/84/EC).
+  await expect(first).toContainText(/MEZ|MESZ/);
+  await expect(page.locator("main")).not.toContainText("UTC");
+  await ctx.close();
+});
