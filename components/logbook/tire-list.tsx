@@ -176,7 +176,7 @@ function TireEditor({ tire, edit }: { tire: TireView; edit: { vehicleId: string;
             <>
               <p>
                 The tire{tire.dotCode ? ` ${tire.dotCode}` : ""} leaves the set, and its{" "}
-                {f.count(tire.series.length, { one: "tread reading goes", other: "tread readings go" })} with it: they leave the wear chart and the
+                {f.count(tire.series.length, { one: "tread reading goes", other: "tread readings go" })} with it, out of the wear chart and the
                 projections. A tread check that measured only this tire is deleted too.
               </p>
               <p className="mt-2">The set&apos;s other tires, their readings and the service history stay. This cannot be undone.</p>
