@@ -5,6 +5,7 @@ import { Copy } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { toast } from "sonner";
+import { useFormat } from "@/components/format/format-provider";
 import { sendJson } from "@/components/passes/api";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -17,6 +18,7 @@ type Open = { id: string; toEmail: string | null; expiresAt: string } | null;
 export function HandOnForm({ vehicleId, nickname, open }: { vehicleId: string; nickname: string; open: Open }) {
   const router = useRouter();
   const [email, setEmail] = useState("");
+  const f = useFormat();
   const [includeReceipts, setIncludeReceipts] = useState(false);
   const [keepSnapshot, setKeepSnapshot] = useState(true);
   const [pending, setPending] = useState(false);
@@ -28,7 +30,7 @@ export function HandOnForm({ vehicleId, nickname, open }: { vehicleId: string; n
         <Card className="space-y-2">
           <CardTitle>A link is open</CardTitle>
           <p className="text-sm">
-            {open.toEmail ? `Sent to ${open.toEmail}` : "A link you passed on yourself"}, until {new Date(open.expiresAt).toLocaleString()}. Making a new one withdraws it.
+            {open.toEmail ? `Sent to ${open.toEmail}` : "A link you passed on yourself"}, until {f.dateTime(open.expiresAt)}. Making a new one withdraws it.
           </p>
           <ConfirmButton
             variant="secondary"

@@ -1,11 +1,10 @@
 "use client";
-// A moment shown in the reader's own time zone and locale (the browser's),
-// not the server's.
+// A moment shown in the reader's own time zone and locale: the formatter the
+// server hands down (components/format), so the server's HTML and the
+// browser's first render agree.
+import { useFormat } from "@/components/format/format-provider";
+
 export function LocalTime({ iso, dateOnly }: { iso: string; dateOnly?: boolean }) {
-  const d = new Date(iso);
-  return (
-    <time dateTime={iso} suppressHydrationWarning>
-      {dateOnly ? d.toLocaleDateString() : d.toLocaleString()}
-    </time>
-  );
+  const f = useFormat();
+  return <time dateTime={iso}>{dateOnly ? f.dateOf(iso) : f.dateTime(iso)}</time>;
 }

@@ -18,13 +18,16 @@ import { hashFeedToken as hashToken, newFeedToken as newToken } from "@/lib/remi
 import { removeStoredFile } from "@/lib/uploads";
 import { HAND_ON_DAYS, type HandOnInput } from "@/lib/validation/household";
 import { todayIso } from "@/lib/validation/logbook";
+import { formatter } from "@/lib/format";
+import { requestPrefs } from "@/lib/format/server";
 import { assertVehicleAccess } from "./access";
 import { exportVehicles } from "./export";
 import { getVehicleLogbook } from "./logbook";
 
 const DAY = 24 * 60 * 60 * 1000;
 const UUID = /^[0-9a-f-]{36}$/i;
-const dateText = (d: Date) => d.toLocaleDateString("en-GB", { timeZone: "UTC", day: "numeric", month: "long", year: "numeric" });
+// The link's end in the sender's zone and locale (the request's), with the zone named.
+const dateText = async (d: Date) => formatter(await requestPrefs()).dateTime(d);
 
 export async function createHandOn({
   access,
@@ -67,7 +70,7 @@ export async function createHandOn({
       to: input.email,
       subject: `${access.userName} hands you the tire history of ${made.nickname}`,
       kind: "hand-on",
-      react: createElement(HandOnEmail, { kind: "offer", fromName: access.userName, vehicle: made.nickname, url, expiresText: dateText(made.row.expiresAt) }),
+      react: createElement(HandOnEmail, { kind: "offer", fromName: access.userName, vehicle: made.nickname, url, expiresText: await dateText(made.row.expiresAt) }),
       idempotencyKey: `hand-on-offer-${made.row.id}`,
     });
     emailed = sent.ok;

@@ -13,6 +13,8 @@ import { appUrl } from "@/lib/env";
 import { AppError, forbidden, notFound } from "@/lib/errors";
 import { hashFeedToken as hashToken, newFeedToken as newToken } from "@/lib/reminders/token";
 import { KEEPER_INVITE_DAYS } from "@/lib/validation/household";
+import { formatter } from "@/lib/format";
+import { requestPrefs } from "@/lib/format/server";
 import { assertVehicleAccess } from "./access";
 
 const DAY = 24 * 60 * 60 * 1000;
@@ -122,7 +124,7 @@ export async function inviteKeeper({
       ownerName: result.vehicle.ownerName,
       vehicle: result.vehicle.nickname,
       acceptUrl: url,
-      expiresText: result.row.expiresAt.toLocaleDateString("en-GB", { timeZone: "UTC", day: "numeric", month: "long", year: "numeric" }),
+      expiresText: formatter(await requestPrefs()).dateTime(result.row.expiresAt),
     }),
     idempotencyKey: `keeper-invitation-${result.row.id}`,
   });

@@ -13,7 +13,8 @@ import { sendEmail } from "@/lib/email/send";
 import { oneClickUnsubscribeUrl, unsubscribeUrl } from "@/lib/email/unsubscribe";
 import { appUrl } from "@/lib/env";
 import { and, eq } from "drizzle-orm";
-import { emailOptOut, user } from "@/db/schema";
+import { driverProfile, emailOptOut, user } from "@/db/schema";
+import { formatter, prefsFrom } from "@/lib/format";
 import { formatMoney } from "./config";
 import { refreshSubscription, toStoredSubscription } from "./service";
 
@@ -96,11 +97,18 @@ export async function applyEvent(event: Stripe.Event): Promise<WebhookOutcome> {
   return fetched && ownerId ? "applied" : "ignored";
 }
 
-const day = (sec: number) => new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" }).format(new Date(sec * 1000));
 
 async function mailAboutInvoice({ userId, invoice, failed }: { userId: string; invoice: Stripe.Invoice; failed: boolean }) {
-  const [u] = await db.select({ name: user.name, email: user.email }).from(user).where(eq(user.id, userId)).limit(1);
+  const [u] = await db
+    .select({ name: user.name, email: user.email, timezone: driverProfile.timezone })
+    .from(user)
+    .leftJoin(driverProfile, eq(driverProfile.userId, user.id))
+    .where(eq(user.id, userId))
+    .limit(1);
   if (!u) return;
+  // Dates in the driver's own stored zone: a webhook has no viewer.
+  const { dateOf } = formatter(prefsFrom({ timeZone: u.timezone }));
+  const day = (sec: number) => dateOf(sec * 1000);
   const billingUrl = `${appUrl()}/account/billing`;
   const key = `stripe-${invoice.id}-${failed ? "failed" : "paid"}-${failed ? invoice.attempt_count : "receipt"}`;
   if (failed) {

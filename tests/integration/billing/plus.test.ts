@@ -84,6 +84,15 @@ describe("checkout through the SDK against the local fake", () => {
 
   it("puts a driver on Plus only when the signed webhooks arrive, and mails one receipt", async () => {
     const u = await signUp({ name: "Wynn Allard" });
+    // The receipt's dates are in the driver's stored zone. One of UTC+14 and
+    // UTC-11 always puts "now" on another calendar day than UTC (14 + 11 > 24),
+    // so the check below fails if the e-mail were written in UTC.
+    const east = new Date().getUTCHours() >= 10;
+    const zone = east ? { name: "Pacific/Kiritimati", hours: 14 } : { name: "Pacific/Pago_Pago", hours: -11 };
+    await db
+      .insert(driverProfile)
+      .values({ userId: u.id, timezone: zone.name })
+      .onConflictDoUpdate({ target: driverProfile.userId, set: { timezone: zone.name } });
     server.mode = "hold";
     try {
       const { sessionId } = await startCheckout({ userId: u.id, interval: "year" });
@@ -107,6 +116,10 @@ describe("checkout through the SDK against the local fake", () => {
     expect(sub!.currentPeriodEnd!.getTime() - Date.now()).toBeGreaterThan(364 * 86_400_000);
     const receipts = (await mailsTo(u.email)).filter((m) => m.subject.startsWith("Your Fourpatch Plus receipt"));
     expect(receipts).toHaveLength(1);
+    // The period's end, shifted by the zone's fixed offset by hand (neither zone keeps summer time), as "2 Dec 2027".
+    const end = new Date(sub!.currentPeriodEnd!.getTime() + zone.hours * 3_600_000);
+    const endText = `${end.getUTCDate()} ${["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"][end.getUTCMonth()]} ${end.getUTCFullYear()}`;
+    expect(receipts[0]!.text ?? receipts[0]!.html).toContain(endText);
     const invoices = await invoicesOf({ userId: u.id });
     expect(invoices).toHaveLength(1);
     expect(invoices[0]).toMatchObject({ status: "paid", currency: "eur" });
