@@ -1,22 +1,22 @@
+"use client";
 // The tread-profile glyph: one tire's tread in cross-section. Bars are the
 // inner, centre and outer groove depths standing on the carcass; the dashed
 // ghost is the depth when new; the shaded band is the zone below the set's
 // limit. The wear pattern (shoulder, centre, even) and the margin show
 // without a number; the text alternative has the numbers.
 import { cn } from "@/lib/cn";
-import { DEFAULT_PREFS, formatter } from "@/lib/format";
+import { useFormat } from "@/components/format/format-provider";
 import type { DepthUnit } from "@/lib/units";
 import { asphalt, limitZone } from "@/lib/visual/tokens";
 import { GLYPH_BOX, treadProfileGeometry, treadProfileText, type TreadProfileInput } from "@/lib/visual/tread-profile";
 
 export type TreadProfileProps = TreadProfileInput & { depthUnit: DepthUnit; className?: string; "data-testid"?: string };
 
-// Shared by server and client components: depths need no zone, so the default formatter does.
-const formatDepth = (mm: number | null | undefined, unit: DepthUnit) => formatter(DEFAULT_PREFS).depth(mm, unit);
-
 export function TreadProfile({ depthUnit, className, "data-testid": testId, ...input }: TreadProfileProps) {
+  // Depths as the reader writes numbers ("6,5 mm" in German), from the formatter the server hands down.
+  const f = useFormat();
   const g = treadProfileGeometry(input);
-  const label = treadProfileText(input, (mm) => formatDepth(mm, depthUnit));
+  const label = treadProfileText(input, (mm) => f.depth(mm, depthUnit));
   const { width, height, baseY } = GLYPH_BOX;
   const left = 2;
   const right = width - 2;

@@ -222,6 +222,8 @@ test("times are shown in the viewer's own zone and locale (a browser in Berlin, 
   // German grouping in numbers ("73.740 km"), German month names in dates; no ISO dates.
   await expect(page.getByRole("heading", { level: 1 }).locator("xpath=..")).toContainText(/\d{1,3}\.\d{3} km/);
   await expect(page.locator("main")).not.toContainText(/\b20\d\d-\d\d-\d\d\b/);
+  // The tread glyph's text alternative writes depths with a German decimal comma (the EU limit, 1,6 mm).
+  await expect(page.getByRole("img", { name: /^Tread profile: .*limit 1,6 mm/ }).first()).toBeAttached();
   await ctx.close();
 });
 
