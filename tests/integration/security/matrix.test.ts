@@ -6,6 +6,8 @@ import fs from "node:fs";
 import path from "node:path";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { ACTORS, expected, type MatrixEntry } from "./matrix/types";
+import { expectedPage, pagesUnderApp, renderPage } from "./matrix/pages";
+import { pages } from "./matrix/pages.matrix";
 import { buildWorld, rowCounts, type World } from "./matrix/world";
 
 vi.mock("next/headers", () => ({
@@ -15,7 +17,7 @@ vi.mock("next/headers", () => ({
 vi.mock("next/cache", () => ({ revalidatePath: () => {}, revalidateTag: () => {} }));
 
 const files = import.meta.glob<{ entries: MatrixEntry[] }>("./matrix/*.matrix.ts", { eager: true });
-const entries = Object.values(files).flatMap((m) => m.entries);
+const entries = Object.values(files).flatMap((m) => m.entries ?? []);
 
 const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"];
 
@@ -77,9 +79,33 @@ describe("authorisation matrix", () => {
     }, 120_000);
   }
 
+  it("lists every page under app/", () => {
+    const listed = new Set(pages.map((p) => p.page));
+    expect(pagesUnderApp().filter((p) => !listed.has(p)), "add these to matrix/pages.matrix.ts").toEqual([]);
+  });
+
+  for (const entry of pages) {
+    it(`${entry.page}: ${entry.what}`, async () => {
+      const wrong: string[] = [];
+      for (const actor of ACTORS) {
+        const want = expectedPage(entry, actor);
+        const before = await rowCounts();
+        const { outcome, pageAlone } = await renderPage(world, actor, entry);
+        if (process.env.PAGES_PROBE) console.log(`PROBE ${entry.page} ${actor} ${outcome} | ${pageAlone}`);
+        if (outcome !== want) wrong.push(`${actor}: ${outcome}, expected ${want}`);
+        // Next renders a page beside its layouts, so a page never relies on its layout's check alone.
+        if (want !== "200" && pageAlone === "200") wrong.push(`${actor}: the page alone renders (only its layout refuses)`);
+        const after = await rowCounts();
+        const changed = Object.keys(before).filter((t) => before[t] !== after[t]);
+        if (changed.length) wrong.push(`${actor}: rendering changed ${changed.map((t) => `${t} ${before[t]}→${after[t]}`).join(", ")}`);
+      }
+      expect(wrong).toEqual([]);
+    }, 60_000);
+  }
+
   it("counts what was checked", () => {
     const cells = entries.length * ACTORS.length;
-    console.log(`authorisation matrix: ${entries.length} route handlers and actions × ${ACTORS.length} actors = ${cells} cells`);
+    console.log(`authorisation matrix: ${entries.length} route handlers and actions × ${ACTORS.length} actors = ${cells} cells; ${pages.length} pages × ${ACTORS.length} actors = ${pages.length * ACTORS.length} cells`);
     expect(cells).toBeGreaterThan(0);
   });
 });

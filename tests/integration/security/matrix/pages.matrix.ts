@@ -1,0 +1,46 @@
+// Every page under app/ × every actor → what the visitor gets (see pages.ts).
+import type { PageEntry } from "./pages";
+
+const NONE = "00000000-0000-4000-8000-000000000000";
+const v = (w: Parameters<NonNullable<PageEntry["params"]>>[0]) => ({ vehicleId: w.car.vehicle.id });
+
+export const pages: PageEntry[] = [
+  { page: "app/(marketing)/page.tsx", what: "landing", expect: { others: "200" } },
+  { page: "app/(marketing)/pricing/page.tsx", what: "pricing", expect: { others: "200" } },
+  { page: "app/(auth)/sign-in/page.tsx", what: "sign-in", expect: { others: "200" } },
+  { page: "app/(auth)/sign-up/page.tsx", what: "sign-up", expect: { others: "200" } },
+  { page: "app/(auth)/forgot-password/page.tsx", what: "forgot password", expect: { others: "200" } },
+  { page: "app/(auth)/reset-password/page.tsx", what: "reset password", expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/page.tsx", what: "my vehicles", expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/new/page.tsx", what: "add a vehicle", expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/[vehicleId]/page.tsx", what: "the owner's vehicle", params: v, expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/[vehicleId]/check/page.tsx", what: "record a check", params: v, expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/[vehicleId]/edit/page.tsx", what: "change or delete the vehicle", params: v, expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/[vehicleId]/hand-on/page.tsx", what: "hand the vehicle on", params: v, expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/[vehicleId]/print/page.tsx", what: "printable history", params: v, expect: { others: "200" } },
+  { page: "app/(driver)/vehicles/handed-on/[snapshotId]/page.tsx", what: "a handed-on copy that does not exist", params: () => ({ snapshotId: NONE }), expect: { others: "200" } },
+  { page: "app/(driver)/sets/[setId]/page.tsx", what: "the owner's set", params: (w) => ({ setId: w.car.set.id }), expect: { others: "200" } },
+  { page: "app/(driver)/log-purchase/page.tsx", what: "log a purchase", expect: { others: "200" } },
+  { page: "app/(driver)/passes/page.tsx", what: "my shop passes", expect: { others: "200" } },
+  { page: "app/(driver)/reminders/page.tsx", what: "reminders", expect: { others: "200" } },
+  { page: "app/(driver)/account/page.tsx", what: "account", expect: { others: "200" } },
+  { page: "app/(driver)/account/billing/page.tsx", what: "billing", expect: { others: "200" } },
+  { page: "app/(shop)/open-a-shop/page.tsx", what: "open a shop", expect: { others: "200" } },
+  { page: "app/(shop)/shop/page.tsx", what: "the shop's passes", expect: { others: "200" } },
+  { page: "app/(shop)/shop/profile/page.tsx", what: "the shop's profile", expect: { others: "200" } },
+  { page: "app/(shop)/shop/passes/[passId]/page.tsx", what: "the actor's pass", params: (w, a) => ({ passId: w.passFor(a) }), expect: { others: "200" } },
+  { page: "app/(shop)/shop/passes/[passId]/[vehicleId]/page.tsx", what: "a vehicle under the actor's pass", params: (w, a) => ({ passId: w.passFor(a), ...v(w) }), expect: { others: "200" } },
+  { page: "app/(shop)/shop/passes/[passId]/[vehicleId]/print/page.tsx", what: "printable history under the actor's pass", params: (w, a) => ({ passId: w.passFor(a), ...v(w) }), expect: { others: "200" } },
+  { page: "app/(admin)/admin/page.tsx", what: "accounts", expect: { others: "200" } },
+  { page: "app/(admin)/admin/shops/page.tsx", what: "shops", expect: { others: "200" } },
+  { page: "app/(admin)/admin/audit/page.tsx", what: "audit log", expect: { others: "200" } },
+  { page: "app/dev/outbox/page.tsx", what: "the outbox fake (not from loopback)", expect: { others: "200" } },
+  { page: "app/dev/outbox/[id]/page.tsx", what: "one message", params: () => ({ id: NONE }), expect: { others: "200" } },
+  { page: "app/dev/stripe/page.tsx", what: "the payments fake", expect: { others: "200" } },
+  { page: "app/dev/stripe/checkout/[sessionId]/page.tsx", what: "a checkout", params: () => ({ sessionId: "cs_test_none" }), expect: { others: "200" } },
+  { page: "app/dev/stripe/invoice/[invoiceId]/page.tsx", what: "an invoice", params: () => ({ invoiceId: "in_test_none" }), expect: { others: "200" } },
+  { page: "app/join/[invitationId]/page.tsx", what: "a shop invitation that does not exist", params: () => ({ invitationId: "no-such-invitation" }), expect: { others: "200" } },
+  { page: "app/keep/[token]/page.tsx", what: "a co-keeper link that does not exist", params: () => ({ token: "no-such-token" }), expect: { others: "200" } },
+  { page: "app/take-on/[token]/page.tsx", what: "a hand-on link that does not exist", params: () => ({ token: "no-such-token" }), expect: { others: "200" } },
+  { page: "app/unsubscribe/[token]/page.tsx", what: "an unsubscribe link that does not verify", params: () => ({ token: "not-a-token" }), expect: { others: "200" } },
+];
