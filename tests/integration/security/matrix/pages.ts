@@ -8,14 +8,20 @@
 import fs from "node:fs";
 import path from "node:path";
 import { isValidElement, type ReactNode } from "react";
+import { PassClosed } from "@/components/passes/pass-closed";
 import { NotForThisAccount } from "@/components/shell/not-for-this-account";
 import { AppError } from "@/lib/errors";
 import { asActor } from "./act";
 import type { Actor } from "./types";
 import type { World } from "./world";
 
-/** "200"; "sign-in" (a redirect to the sign-in page); "not-for-this-account"; "404"; or "redirect <path>". */
-export type PageOutcome = "200" | "sign-in" | "not-for-this-account" | "404" | `redirect ${string}` | `error ${string}`;
+/**
+ * "200"; "sign-in" (a redirect to the sign-in page); "not-for-this-account";
+ * "pass-closed" (the page says the pass has ended, and shows nothing of the
+ * logbook); "404"; "redirect <path>" (ids written as :id); "error <code>" (a
+ * refusal thrown as the app's error, shown by the error page).
+ */
+export type PageOutcome = "200" | "sign-in" | "not-for-this-account" | "pass-closed" | "404" | `redirect ${string}` | `error ${string}`;
 
 export type PageEntry = {
   /** The page file, e.g. "app/(driver)/vehicles/[vehicleId]/page.tsx". */
@@ -59,24 +65,32 @@ function layoutsOf(page: string): string[] {
   return out;
 }
 
-function showsNotForThisAccount(node: ReactNode, depth = 0): boolean {
-  if (depth > 12 || node === null || node === undefined || typeof node !== "object") return false;
-  if (Array.isArray(node)) return node.some((n) => showsNotForThisAccount(n as ReactNode, depth + 1));
-  if (!isValidElement(node)) return false;
-  if (node.type === NotForThisAccount) return true;
-  return showsNotForThisAccount((node.props as { children?: ReactNode }).children, depth + 1);
+/** The refusal a rendered tree shows in place of the page, if any. */
+function refusalIn(node: ReactNode, depth = 0): PageOutcome | null {
+  if (depth > 12 || node === null || node === undefined || typeof node !== "object") return null;
+  if (Array.isArray(node)) {
+    for (const n of node) {
+      const r = refusalIn(n as ReactNode, depth + 1);
+      if (r) return r;
+    }
+    return null;
+  }
+  if (!isValidElement(node)) return null;
+  if (node.type === NotForThisAccount) return "not-for-this-account";
+  if (node.type === PassClosed) return "pass-closed";
+  return refusalIn((node.props as { children?: ReactNode }).children, depth + 1);
 }
 
 type Component = (props: Record<string, unknown>) => Promise<ReactNode> | ReactNode;
 
 async function outcomeOf(fn: () => Promise<ReactNode> | ReactNode): Promise<PageOutcome> {
   try {
-    return showsNotForThisAccount(await fn()) ? "not-for-this-account" : "200";
+    return refusalIn(await fn()) ?? "200";
   } catch (err) {
     const digest = (err as { digest?: unknown })?.digest;
     if (typeof digest === "string" && digest.startsWith("NEXT_REDIRECT")) {
       const to = digest.split(";")[2] ?? "";
-      return to.startsWith("/sign-in") ? "sign-in" : `redirect ${to.split("?")[0]}`;
+      return to.startsWith("/sign-in") ? "sign-in" : `redirect ${to.split("?")[0].replace(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/g, ":id")}`;
     }
     if (typeof digest === "string" && digest === "NEXT_HTTP_ERROR_FALLBACK;404") return "404";
     // A refusal thrown as the app's error (the error page shows it): never data.
