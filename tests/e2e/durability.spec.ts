@@ -1,5 +1,6 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
+import net from "node:net";
 import os from "node:os";
 import path from "node:path";
 import { PGlite } from "@electric-sql/pglite";
@@ -8,10 +9,21 @@ import { expect, test } from "@playwright/test";
 // Issue 9 against the production build the browser tests use (.next-e2e):
 // a second `next start` on a data folder another server holds stops with the
 // reason, and a real `next start` killed with SIGKILL under load keeps every
-// write it acknowledged. Both start extra servers beside the e2e one, on the
-// next ports up.
+// write it acknowledged. Both start extra servers beside the e2e one, on
+// ports the system finds free.
 const E2E_PORT = Number(process.env.E2E_PORT ?? 3210);
 const ROOT = path.resolve(import.meta.dirname, "../..");
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer();
+    srv.once("error", reject);
+    srv.listen(0, "127.0.0.1", () => {
+      const { port } = srv.address() as net.AddressInfo;
+      srv.close(() => resolve(port));
+    });
+  });
+}
 
 function nextStart(port: number, dataDir: string): ChildProcess {
   return spawn("npx", ["next", "start", "-p", String(port)], {
@@ -74,7 +86,8 @@ async function driver(base: string): Promise<string> {
 test.describe("the production server and its data folder", () => {
   test("a second server on a folder another server holds exits at once, naming the folder and the holder", async () => {
     const dataDir = `tests/e2e/.data-${E2E_PORT}`;
-    const second = nextStart(E2E_PORT + 1, dataDir);
+    const port = await freePort();
+    const second = nextStart(port, dataDir);
     let err = "";
     second.stderr!.on("data", (c: Buffer) => (err += c.toString()));
     second.stdout!.resume();
@@ -86,12 +99,12 @@ test.describe("the production server and its data folder", () => {
     const holder = Number(err.match(/PID (\d+)/)?.[1]);
     // The holder is the running e2e server.
     expect(fs.readFileSync(`/proc/${holder}/cmdline`, "utf8")).toMatch(/next/);
-    await expect(fetch(`http://localhost:${E2E_PORT + 1}/api/auth/ok`)).rejects.toThrow();
+    await expect(fetch(`http://localhost:${port}/api/auth/ok`)).rejects.toThrow();
   });
 
   test("every write a real `next start` acknowledged survives SIGKILL, whole, and the folder opens again", async () => {
     test.setTimeout(120_000);
-    const port = E2E_PORT + 2;
+    const port = await freePort();
     const base = `http://localhost:${port}`;
     const dataDir = path.join(fs.mkdtempSync(path.join(os.tmpdir(), "fourpatch-next-crash-")), "data");
     const server = nextStart(port, dataDir);
