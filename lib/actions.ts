@@ -3,7 +3,7 @@ import "server-only";
 // input, and a discriminated result with per-field errors. Server actions
 // are public endpoints, so the checks run here every time.
 import type { z } from "zod";
-import { getSession, type Session } from "@/lib/auth/session";
+import { getSessionRecord, type Session } from "@/lib/auth/session";
 import { requireAdmin, requireSession } from "@/lib/auth/roles";
 import { toAppError, type ErrorCode, type FieldErrors } from "@/lib/errors";
 import { fieldErrors } from "@/lib/validation/fields";
@@ -22,7 +22,7 @@ export function action<S extends z.ZodType, T>(
 ) {
   return async (raw: z.input<S> | FormData): Promise<ActionResult<T>> => {
     try {
-      const session = await getSession();
+      const session = await getSessionRecord();
       const s = options.role === "admin" ? requireAdmin(session) : requireSession(session);
       const input = raw instanceof FormData ? Object.fromEntries(raw.entries()) : raw;
       // The same rule as route handlers: no control characters reach the database.

@@ -3,6 +3,7 @@ import "server-only";
 // feed's secret and the e-mail deliveries. Every query takes the acting
 // driver (or, for the feed, the secret that stands for them).
 import { and, eq, inArray, isNull, lt, or, sql } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { driverProfile, emailOptOut, reminderDelivery, reminderFeed, user } from "@/db/schema";
 import { planOf, plusSql } from "@/db/queries/billing";
@@ -190,7 +191,7 @@ export async function driversForDelivery(): Promise<string[]> {
   return rows.map((r) => r.userId);
 }
 
-export type Claimed = { id: string; reminderId: string; dueOn: string };
+export type Claimed = { id: string; reminderId: string; dueOn: string; claimId: string };
 
 /**
  * Claims the deliveries this run may send for one driver: new rows it wins
@@ -198,6 +199,12 @@ export type Claimed = { id: string; reminderId: string; dueOn: string };
  * pending rows whose claim is older than `staleBefore` (a run that crashed
  * or failed). Each claim is one atomic statement, so two overlapping runs
  * never hold the same row.
+ *
+ * Rows keep the grouping of the message they were claimed for: new rows get
+ * `claimId`, and the rows of each earlier claim get a claim of their own
+ * (`claimId#md5(earlier claim)`). A message is one claim's rows, so a retry
+ * rebuilds exactly the message that may have gone out before a crash, with
+ * the same idempotency key, even when other reminders have come due since.
  */
 export async function claimDeliveries({
   userId,
@@ -217,21 +224,27 @@ export async function claimDeliveries({
         .insert(reminderDelivery)
         .values(due.map((d) => ({ userId, reminderId: d.reminderId, dueOn: d.dueOn, channel: "email", status: "pending", claimId, claimedAt: now, attempts: 1 })))
         .onConflictDoNothing()
-        .returning({ id: reminderDelivery.id, reminderId: reminderDelivery.reminderId, dueOn: reminderDelivery.dueOn })
+        .returning({ id: reminderDelivery.id, reminderId: reminderDelivery.reminderId, dueOn: reminderDelivery.dueOn, claimId: reminderDelivery.claimId })
     : [];
+  // The same table under another name: in UPDATE … FROM it shows each row as it was before this statement.
+  const before = alias(reminderDelivery, "before");
+  // The rule cannot see the .where() after .from(): it is there, scoped to this driver's stale pending rows.
+  // eslint-disable-next-line drizzle/enforce-update-with-where
   const retaken = await db
     .update(reminderDelivery)
-    .set({ claimId, claimedAt: now, attempts: sql`${reminderDelivery.attempts} + 1` })
+    .set({ claimId: sql`${claimId} || '#' || md5(coalesce(${before.claimId}, ''))`, claimedAt: now, attempts: sql`${reminderDelivery.attempts} + 1` })
+    .from(before)
     .where(
       and(
+        eq(before.id, reminderDelivery.id),
         eq(reminderDelivery.userId, userId),
         eq(reminderDelivery.channel, "email"),
         eq(reminderDelivery.status, "pending"),
         or(isNull(reminderDelivery.claimedAt), lt(reminderDelivery.claimedAt, staleBefore)),
       ),
     )
-    .returning({ id: reminderDelivery.id, reminderId: reminderDelivery.reminderId, dueOn: reminderDelivery.dueOn });
-  return [...won, ...retaken];
+    .returning({ id: reminderDelivery.id, reminderId: reminderDelivery.reminderId, dueOn: reminderDelivery.dueOn, claimId: reminderDelivery.claimId });
+  return [...won, ...retaken].map((r) => ({ ...r, claimId: r.claimId! }));
 }
 
 export async function markDeliveries({

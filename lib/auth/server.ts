@@ -5,11 +5,14 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
 import { admin, organization } from "better-auth/plugins";
 import { createElement } from "react";
+import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import * as schema from "@/db/schema";
 import { appUrl, env } from "@/lib/env";
 import { sendEmail } from "@/lib/email/send";
 import PasswordResetEmail from "@/emails/password-reset";
+import SignUpAttemptEmail from "@/emails/sign-up-attempt";
+import VerifyEmail from "@/emails/verify-email";
 import WelcomeEmail from "@/emails/welcome";
 import { isSingleLine } from "@/lib/validation/text";
 import { ac, shopRoles } from "./access";
@@ -40,6 +43,23 @@ function createAuth() {
       minPasswordLength: 10,
       resetPasswordTokenExpiresIn: 60 * 60,
       revokeSessionsOnPasswordReset: true,
+      // No session until the address is confirmed through the link, and sign-up
+      // answers an address that has an account exactly like a new one (no
+      // enumeration): the owner gets an e-mail instead.
+      requireEmailVerification: true,
+      // Not awaited, like every mail below that depends on whether the address has an account.
+      onExistingUserSignUp: async ({ user }) => {
+        void sendEmail({
+          to: user.email,
+          subject: "Someone tried to sign up with your address",
+          kind: "sign-up-attempt",
+          react: createElement(SignUpAttemptEmail, { name: user.name, signInUrl: `${appUrl()}/sign-in`, resetUrl: `${appUrl()}/forgot-password` }),
+        }).catch((err: unknown) => console.error(err));
+      },
+      // Following the reset link proves the address as well as the verification link does.
+      onPasswordReset: async ({ user }) => {
+        if (!user.emailVerified) await db.update(schema.user).set({ emailVerified: true }).where(eq(schema.user.id, user.id));
+      },
       // Not awaited: the answer must not take longer for an address that has an account.
       sendResetPassword: async ({ user, url }) => {
         void sendEmail({
@@ -48,6 +68,30 @@ function createAuth() {
           kind: "password-reset",
           react: createElement(PasswordResetEmail, { name: user.name, resetUrl: url }),
         }).catch((err: unknown) => console.error(err));
+      },
+    },
+    emailVerification: {
+      sendOnSignUp: true,
+      // Sign-in of an unconfirmed account answers 403 EMAIL_NOT_VERIFIED; the
+      // form offers "send the link again" (POST /send-verification-email).
+      sendOnSignIn: false,
+      autoSignInAfterVerification: true,
+      expiresIn: 60 * 60 * 24,
+      sendVerificationEmail: async ({ user, url }) => {
+        void sendEmail({
+          to: user.email,
+          subject: "Confirm your address for Fourpatch",
+          kind: "verify-email",
+          react: createElement(VerifyEmail, { name: user.name, verifyUrl: url }),
+        }).catch((err: unknown) => console.error(err));
+      },
+      afterEmailVerification: async (user) => {
+        await sendEmail({
+          to: user.email,
+          subject: "Your Fourpatch logbook is ready",
+          kind: "welcome",
+          react: createElement(WelcomeEmail, { name: user.name, vehiclesUrl: `${appUrl()}/vehicles` }),
+        });
       },
     },
     databaseHooks: {
@@ -62,12 +106,6 @@ function createAuth() {
           },
           after: async (user) => {
             await onboardNewUser({ userId: user.id });
-            await sendEmail({
-              to: user.email,
-              subject: "Your Fourpatch logbook is ready",
-              kind: "welcome",
-              react: createElement(WelcomeEmail, { name: user.name, vehiclesUrl: `${appUrl()}/vehicles` }),
-            });
           },
         },
       },
@@ -80,6 +118,7 @@ function createAuth() {
         "/sign-in/email": { window: 60, max: 10 },
         "/sign-up/email": { window: 60, max: 10 },
         "/request-password-reset": { window: 60, max: 5 },
+        "/send-verification-email": { window: 60, max: 5 },
       },
     },
     advanced: {

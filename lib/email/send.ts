@@ -26,6 +26,8 @@ function resend() {
 
 export type EmailKind =
   | "welcome"
+  | "verify-email"
+  | "sign-up-attempt"
   | "password-reset"
   | "invitation"
   | "reminder-digest"

@@ -12,6 +12,11 @@ import "server-only";
 //    claimed_at < cutoff), so nothing is lost; the window is longer than a
 //    send can take, so a slow run is never doubled. A refusal the provider
 //    reports (not an exception) clears the stamp, to be retried next run.
+// 4. A taken-over claim is sent as the same message it was (its own rows,
+//    apart from reminders that came due since), with an idempotency key made
+//    of its row ids: if the dead run's message had reached the provider, the
+//    provider answers with that message and delivers nothing again
+//    (tests/integration/security/reminder-crash.test.ts kills a run there).
 import { createHash, randomUUID } from "node:crypto";
 import { claimDeliveries, computeFor, driversForDelivery, markDeliveries, reminderProfile } from "@/db/queries/reminders";
 import { badgeFor, conditionLabelFor } from "@/lib/reminders/severity";
@@ -58,38 +63,44 @@ export async function runReminderDeliveries({ now = new Date(), send = sendEmail
       const claimed = await claimDeliveries({ userId, due: due.map((i) => ({ reminderId: i.id, dueOn: i.date })), claimId: runId, now, staleBefore });
       if (claimed.length === 0) continue;
 
-      // A retaken row whose reminder moved or vanished since is not sent: the moved date has a row of its own.
+      // One message per claim: the new rows of this run, and each earlier
+      // claim's rows on their own, so a retry repeats the very message (and
+      // key) that may already have gone out.
+      const groups = new Map<string, typeof claimed>();
+      for (const c of claimed) groups.set(c.claimId, [...(groups.get(c.claimId) ?? []), c]);
       const current = new Map(items.map((i) => [`${i.id}|${i.date}`, i]));
-      const toSend = claimed.flatMap((c) => {
-        const item = current.get(`${c.reminderId}|${c.dueOn}`);
-        return item ? [{ row: c, item }] : [];
-      });
-      const gone = claimed.filter((c) => !current.has(`${c.reminderId}|${c.dueOn}`)).map((c) => c.id);
-      await markDeliveries({ userId, ids: gone, claimId: runId, outcome: { status: "cancelled" } });
-      summary.cancelled += gone.length;
-      if (toSend.length === 0) continue;
+      for (const [claimId, rows] of groups) {
+        // The key covers every row of the claim, including any whose reminder has moved since.
+        const idempotencyKey = `reminder-digest/${createHash("sha256").update(rows.map((r) => r.id).sort().join(",")).digest("hex")}`;
+        // A retaken row whose reminder moved or vanished since is not sent: the moved date has a row of its own.
+        const toSend = rows.flatMap((c) => {
+          const item = current.get(`${c.reminderId}|${c.dueOn}`);
+          return item ? [{ row: c, item }] : [];
+        });
+        const gone = rows.filter((c) => !current.has(`${c.reminderId}|${c.dueOn}`)).map((c) => c.id);
+        await markDeliveries({ userId, ids: gone, claimId, outcome: { status: "cancelled" } });
+        summary.cancelled += gone.length;
+        if (toSend.length === 0) continue;
 
-      const ids = toSend.map((t) => t.row.id);
-      let result: SendEmailResult;
-      try {
-        // A retry of the same claimed rows carries the same key, so a message the
-        // provider accepted just before a crash is not delivered twice.
-        const idempotencyKey = `reminder-digest/${createHash("sha256").update([...ids].sort().join(",")).digest("hex")}`;
-        result = await send({ ...digestEmail({ to: profile.email, name: profile.name, userId, items: toSend.map((t) => t.item), timeZone: profile.timezone }), idempotencyKey });
-      } catch (err) {
-        // Unknown whether it went out: keep the claim; the retry window decides.
-        await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "failed", error: String(err), retryNow: false } });
-        summary.failed += 1;
-        continue;
+        const ids = toSend.map((t) => t.row.id);
+        let result: SendEmailResult;
+        try {
+          result = await send({ ...digestEmail({ to: profile.email, name: profile.name, userId, items: toSend.map((t) => t.item), timeZone: profile.timezone }), idempotencyKey });
+        } catch (err) {
+          // Unknown whether it went out: keep the claim; the retry window decides.
+          await markDeliveries({ userId, ids, claimId, outcome: { status: "failed", error: String(err), retryNow: false } });
+          summary.failed += 1;
+          continue;
+        }
+        if (!result.ok) {
+          await markDeliveries({ userId, ids, claimId, outcome: { status: "failed", error: result.error, retryNow: true } });
+          summary.failed += 1;
+          continue;
+        }
+        await markDeliveries({ userId, ids, claimId, outcome: { status: "sent", providerMessageId: result.id } });
+        summary.emails += 1;
+        summary.items += ids.length;
       }
-      if (!result.ok) {
-        await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "failed", error: result.error, retryNow: true } });
-        summary.failed += 1;
-        continue;
-      }
-      await markDeliveries({ userId, ids, claimId: runId, outcome: { status: "sent", providerMessageId: result.id } });
-      summary.emails += 1;
-      summary.items += ids.length;
     } catch (err) {
       console.error(`[reminders] delivery for ${userId} failed`, err);
       summary.failed += 1;

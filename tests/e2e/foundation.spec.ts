@@ -1,6 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { demoAccounts } from "../../db/seed/demo-accounts";
-import { openNewestMail, SessionPages } from "./pages/session";
+import { confirmSignUp, openNewestMail, SessionPages } from "./pages/session";
 
 test.describe("accounts and roles", () => {
   test("the landing page says what Fourpatch does and carries the safety caution", async ({ page }) => {
@@ -12,14 +12,60 @@ test.describe("accounts and roles", () => {
   test("a new driver signs up and lands on an empty vehicles page", async ({ page }) => {
     await page.goto("/sign-up");
     await page.getByLabel("Your name").fill("Nell Brightwater");
-    await page.getByLabel("E-mail").fill(`nell-${Date.now()}@example.test`);
+    const email = `nell-${Date.now()}@example.test`;
+    await page.getByLabel("E-mail").fill(email);
     await page.getByLabel("Password").fill("short");
     await page.getByRole("button", { name: "Create my logbook" }).click();
     await expect(page.getByText("Use at least 10 characters.")).toBeVisible();
     await page.getByLabel("Password").fill("a-long-enough-password");
     await page.getByRole("button", { name: "Create my logbook" }).click();
+    // No session before the address is confirmed: the link in the e-mail opens the logbook.
+    await confirmSignUp(page, email);
     await expect(page).toHaveURL(/\/vehicles$/);
     await expect(page.getByRole("heading", { name: "Nell's vehicles" })).toBeVisible();
+  });
+
+  test("sign-up with a taken address looks like any other; an unconfirmed account is told to confirm and gets the link again", async ({ page }) => {
+    // A taken address: the same answer as a new one, and its owner hears of the attempt.
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Someone Else");
+    await page.getByLabel("E-mail").fill(demoAccounts.tomas.email);
+    await page.getByLabel("Password").fill("a-long-enough-password");
+    await page.getByRole("button", { name: "Create my logbook" }).click();
+    await expect(page.getByText("Check your inbox")).toBeVisible();
+    await expect(page.getByText("already exists")).toHaveCount(0);
+    await expect(async () => {
+      await page.goto(`/dev/outbox?to=${encodeURIComponent(demoAccounts.tomas.email)}`);
+      await page.getByRole("link", { name: "Someone tried to sign up with your address" }).first().click({ timeout: 1_000 });
+    }).toPass({ timeout: 10_000 });
+    await expect(page.frameLocator('iframe[title="Message"]').getByRole("link", { name: "Sign in to my logbook" })).toBeVisible();
+
+    // A new address not yet confirmed: sign-in says so and sends the link again.
+    const email = `unconfirmed-${Date.now()}@example.test`;
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Ivo Penhallow");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("a-long-enough-password");
+    await page.getByRole("button", { name: "Create my logbook" }).click();
+    await expect(page.getByText("Check your inbox")).toBeVisible();
+    await new SessionPages(page).signIn(email, "a-long-enough-password");
+    await expect(page.getByText("Confirm your e-mail address first")).toBeVisible();
+    await page.getByRole("button", { name: "Send the link again" }).click();
+    await expect(page.getByText("A new link is on its way.")).toBeVisible();
+    await expect(page).toHaveURL(/\/sign-in/);
+    await expect(async () => {
+      await page.goto(`/dev/outbox?to=${encodeURIComponent(email)}`);
+      await expect(page.getByRole("link", { name: "Confirm your address for Fourpatch" })).toHaveCount(2, { timeout: 1_000 });
+    }).toPass({ timeout: 10_000 });
+    await page.getByRole("link", { name: "Confirm your address for Fourpatch" }).first().click();
+    const href = await page.frameLocator('iframe[title="Message"]').getByRole("link", { name: "Confirm my address" }).getAttribute("href");
+    await page.goto(href!);
+    await expect(page).toHaveURL(/\/vehicles$/);
+    // The link signs in once: followed again, it only leads to the sign-in form.
+    await page.context().clearCookies();
+    await page.goto(href!);
+    await expect(page).toHaveURL(/\/sign-in\?verified=1/);
+    await expect(page.getByRole("heading", { name: "Sign in" })).toBeVisible();
   });
 
   for (const [who, home] of [
@@ -82,6 +128,7 @@ test.describe("accounts and roles", () => {
     await page.getByLabel("E-mail").fill(email);
     await page.getByLabel("Password").fill("the-first-password");
     await page.getByRole("button", { name: "Create my logbook" }).click();
+    await confirmSignUp(page, email);
     await expect(page).toHaveURL(/\/vehicles$/);
     await new SessionPages(page).signOut();
 
@@ -113,6 +160,7 @@ test.describe("accounts and roles", () => {
     await page.getByLabel("E-mail").fill(email);
     await page.getByLabel("Password").fill("quinns-password-1");
     await page.getByRole("button", { name: "Create my logbook" }).click();
+    await confirmSignUp(page, email);
     await expect(page).toHaveURL(/\/vehicles$/);
     const session = new SessionPages(page);
     await session.signOut();

@@ -3,7 +3,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { demoAccounts } from "../../db/seed/demo-accounts";
 import { addDays, dotWeekOf, formatDotDateCode } from "../../lib/tires";
 import { LogbookPages, POSITIONS, type Position } from "./pages/logbook";
-import { SessionPages } from "./pages/session";
+import { confirmSignUp, SessionPages } from "./pages/session";
 
 const SCREENS = "tests/e2e/artifacts/screens";
 fs.mkdirSync(SCREENS, { recursive: true });
@@ -153,9 +153,11 @@ test("the demo's set page shows the wear chart with the zone below the limit and
 test("a new driver adds the vehicle inside the purchase flow; a wrong field keeps everything typed", async ({ page }) => {
   await page.goto("/sign-up");
   await page.getByLabel("Your name").fill("Bram Oakhollow");
-  await page.getByLabel("E-mail").fill(`bram-${Date.now()}@example.test`);
+  const email = `bram-${Date.now()}@example.test`;
+  await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill("a-long-enough-password");
   await page.getByRole("button", { name: "Create my logbook" }).click();
+  await confirmSignUp(page, email);
   await expect(page).toHaveURL(/\/vehicles$/);
   const logbook = new LogbookPages(page);
   await logbook.openPurchase();

@@ -6,6 +6,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { addDays, dotWeekOf, formatDotDateCode } from "../../lib/tires";
 import { BillingPages } from "./pages/billing";
 import { RemindersPage } from "./pages/reminders";
+import { confirmSignUp } from "./pages/session";
 
 const SCREENS = "tests/e2e/artifacts/screens";
 fs.mkdirSync(SCREENS, { recursive: true });
@@ -19,6 +20,7 @@ async function signUpNew(page: Page, name: string) {
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill("a-long-enough-password");
   await page.getByRole("button", { name: "Create my logbook" }).click();
+  await confirmSignUp(page, email);
   await expect(page).toHaveURL(/\/vehicles$/);
   return email;
 }

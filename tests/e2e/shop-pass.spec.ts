@@ -5,7 +5,7 @@
 import { mkdirSync } from "node:fs";
 import { expect, test } from "@playwright/test";
 import { demoAccounts } from "../../db/seed/demo-accounts";
-import { openNewestMail, SessionPages } from "./pages/session";
+import { confirmSignUp, openNewestMail, SessionPages } from "./pages/session";
 import { DriverPassesPage, ShopWorkspacePage } from "./pages/shop-pass";
 
 const SCREENS = "tests/e2e/artifacts/screens";
@@ -122,6 +122,8 @@ test("the owner invites a technician, who joins once through the e-mailed link, 
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill("a-long-enough-password");
   await page.getByRole("button", { name: "Create my logbook" }).click();
+  // The invited address is confirmed through its e-mail; the link comes back to the invitation, signed in.
+  await confirmSignUp(page, email);
   await expect(page).toHaveURL(new RegExp(`${path}$`));
   await page.getByRole("button", { name: "Join Quillby Tread Works" }).click();
   await expect(page).toHaveURL(/\/shop$/);

@@ -42,11 +42,48 @@ function FormFields<T extends FieldValues>({ form, fields }: { form: ReturnType<
   );
 }
 
+/** Where the link in the verification e-mail leads: back here, signed in, then on to `next` (app/(auth)/sign-in/page.tsx). */
+export function verifiedCallback(next: string) {
+  return `/sign-in?verified=1&next=${encodeURIComponent(next)}`;
+}
+
+function ResendVerification({ email, next }: { email: string; next: string }) {
+  const [state, setState] = useState<"idle" | "sending" | "sent">("idle");
+  return (
+    <Alert tone="error" title="Confirm your e-mail address first">
+      <p>Open the link we sent to {email} to finish creating your account.</p>
+      {state === "sent" ? (
+        <p role="status" className="mt-2 font-medium">A new link is on its way. It works for 24 hours.</p>
+      ) : (
+        <Button
+          type="button"
+          variant="secondary"
+          size="sm"
+          className="mt-2"
+          pending={state === "sending"}
+          pendingLabel="Sending…"
+          onClick={async () => {
+            setState("sending");
+            await authClient.sendVerificationEmail({ email, callbackURL: verifiedCallback(next) });
+            setState("sent");
+          }}
+        >
+          Send the link again
+        </Button>
+      )}
+    </Alert>
+  );
+}
+
 export function SignInForm() {
   const router = useRouter();
   const next = useSafeNext();
-  const justReset = useSearchParams().get("reset") === "1";
+  const params = useSearchParams();
+  const justReset = params.get("reset") === "1";
+  // The verification link came back with an error (expired, used or altered).
+  const badLink = params.get("verified") === "1" && !!params.get("error");
   const [error, setError] = useState<string | null>(null);
+  const [unverified, setUnverified] = useState<string | null>(null);
   const form = useForm<z.infer<typeof signInSchema>>({ resolver: zodResolver(signInSchema) });
   return (
     <form
@@ -54,7 +91,12 @@ export function SignInForm() {
       className="space-y-4"
       onSubmit={form.handleSubmit(async (values) => {
         setError(null);
+        setUnverified(null);
         const { error } = await authClient.signIn.email(values);
+        if (error?.status === 403 && error.code === "EMAIL_NOT_VERIFIED") {
+          setUnverified(values.email);
+          return;
+        }
         if (error) {
           setError(
             error.status === 429
@@ -70,6 +112,10 @@ export function SignInForm() {
       })}
     >
       {error ? <Alert tone="error">{error}</Alert> : null}
+      {unverified ? <ResendVerification email={unverified} next={next} /> : null}
+      {badLink && !error && !unverified ? (
+        <Alert tone="error">This confirmation link has expired or was already used. Sign in to get a new one.</Alert>
+      ) : null}
       {justReset && !error ? <Alert tone="success">Your new password is saved. Sign in with it.</Alert> : null}
       <FormFields
         form={form}
@@ -90,29 +136,33 @@ export function SignInForm() {
 }
 
 export function SignUpForm() {
-  const router = useRouter();
   // An invitation, a hand-on link (or any page) that sent the visitor here gets them back after sign-up.
   const next = useSafeNext();
   const back = next === "/start" ? null : next;
   const [error, setError] = useState<string | null>(null);
+  const [sentTo, setSentTo] = useState<string | null>(null);
   const form = useForm<z.infer<typeof signUpSchema>>({ resolver: zodResolver(signUpSchema) });
+  // The same answer whether or not the address already has an account: its
+  // owner gets an e-mail about the attempt instead (lib/auth/server.ts).
+  if (sentTo)
+    return (
+      <Alert tone="success" title="Check your inbox">
+        We sent a link to {sentTo}. Open it to finish creating your logbook; it works for 24 hours. Nothing arrived?
+        Look in the spam folder, or <Link href={back ? `/sign-in?next=${encodeURIComponent(back)}` : "/sign-in"} className={linkClass}>sign in</Link> to have it sent again.
+      </Alert>
+    );
   return (
     <form
       noValidate
       className="space-y-4"
       onSubmit={form.handleSubmit(async (values) => {
         setError(null);
-        const { error } = await authClient.signUp.email(values);
+        const { error } = await authClient.signUp.email({ ...values, callbackURL: verifiedCallback(back ?? "/vehicles") });
         if (error) {
-          setError(
-            error.code === "USER_ALREADY_EXISTS" || error.status === 422
-              ? "An account with this e-mail already exists. Sign in instead, or reset its password."
-              : (error.message ?? "Could not create the account. Please try again."),
-          );
+          setError(error.status === 429 ? "Too many attempts. Wait a minute and try again." : (error.message ?? "Could not create the account. Please try again."));
           return;
         }
-        router.push(back ?? "/vehicles");
-        router.refresh();
+        setSentTo(values.email);
       })}
     >
       {error ? <Alert tone="error">{error}</Alert> : null}

@@ -6,6 +6,7 @@ import { PassStateBadge } from "@/components/passes/pass-state-badge";
 import { TimeLeft } from "@/components/passes/time-left";
 import { Card } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
+import { NotForThisAccount } from "@/components/shell/not-for-this-account";
 import { listShopWork, pageShopPasses } from "@/db/queries/passes";
 import { membershipsOf, requireSession } from "@/lib/auth/roles";
 import { getSession } from "@/lib/auth/session";
@@ -26,6 +27,8 @@ export default async function ShopHomePage({ searchParams }: { searchParams: Pro
   const now = new Date();
   const { after } = await searchParams;
   const shops = await membershipsOf({ userId: session.user.id });
+  // Next runs this page beside the layout's check: refuse here too (the layout shows the same).
+  if (shops.length === 0) return <NotForThisAccount area="shop workspace" home="/vehicles" />;
   const shop = shops[0];
   // A stale or edited cursor starts again from the first page rather than failing.
   const page = (cursor: string | undefined) => pageShopPasses({ session, now, cursor, limit: PASSES_PER_PAGE });

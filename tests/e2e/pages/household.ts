@@ -1,4 +1,5 @@
 import { expect, type Page } from "@playwright/test";
+import { confirmSignUp } from "./session";
 
 /** Page objects for what a driver owns: co-keepers, handing a vehicle on, export and import. */
 export class HouseholdPages {
@@ -44,6 +45,7 @@ export class HouseholdPages {
     await this.page.getByLabel("E-mail").fill(email);
     await this.page.getByLabel("Password").fill(password);
     await this.page.getByRole("button", { name: "Create my logbook" }).click();
+    await confirmSignUp(this.page, email);
   }
 
   async exportZip(saveTo: string) {

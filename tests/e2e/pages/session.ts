@@ -29,3 +29,22 @@ export async function openNewestMail(page: Page, to: string, subject: string | R
   await page.getByRole("link", { name: subject }).first().click();
   await expect(page.getByRole("heading", { name: subject })).toBeVisible();
 }
+
+/**
+ * After "Create my logbook": the form says to check the inbox, and the new
+ * account opens only through the link in the verification e-mail, read from
+ * the outbox fake (the mail is sent without waiting, so the outbox is
+ * reloaded until it is there). Following it signs in and lands where the
+ * sign-up would have gone.
+ */
+export async function confirmSignUp(page: Page, email: string) {
+  await expect(page.getByText("Check your inbox")).toBeVisible();
+  await expect(page.getByText(`We sent a link to ${email}.`)).toBeVisible();
+  await expect(async () => {
+    await page.goto(`/dev/outbox?to=${encodeURIComponent(email)}`);
+    await page.getByRole("link", { name: "Confirm your address for Fourpatch" }).first().click({ timeout: 1_000 });
+  }).toPass({ timeout: 10_000 });
+  const href = await page.frameLocator('iframe[title="Message"]').getByRole("link", { name: "Confirm my address" }).getAttribute("href");
+  expect(href).toContain("/api/auth/verify-email?token=");
+  await page.goto(href!);
+}

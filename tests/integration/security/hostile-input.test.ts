@@ -41,6 +41,7 @@ import * as vehiclesRoute from "@/app/api/vehicles/route";
 import * as authRoute from "@/app/api/auth/[...all]/route";
 import * as feedTokenRoute from "@/app/api/feed/[token]/route";
 import * as oneClickRoute from "@/app/unsubscribe/[token]/one-click/route";
+import { setAuthTimingFloorsForTests } from "@/lib/auth/endpoints";
 import { resetRateLimitsForTests } from "@/lib/rate-limit";
 import { vehicleBody } from "../logbook/fixtures";
 import { buildWorld, type World } from "./matrix/world";
@@ -149,6 +150,9 @@ async function rowTotals(): Promise<string> {
 }
 
 beforeAll(async () => {
+  // The sign-up and reset answers wait for a time floor (no enumeration by timing,
+  // tested in sign-up-enumeration.test.ts); here it would only add minutes.
+  setAuthTimingFloorsForTests({ signUpMs: 0, resetMs: 0 });
   world = await buildWorld();
 }, 120_000);
 

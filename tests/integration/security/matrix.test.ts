@@ -6,6 +6,8 @@ import fs from "node:fs";
 import path from "node:path";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { ACTORS, expected, type MatrixEntry } from "./matrix/types";
+import { expectedPage, pagesUnderApp, renderPage } from "./matrix/pages";
+import { pages } from "./matrix/pages.matrix";
 import { buildWorld, rowCounts, type World } from "./matrix/world";
 
 vi.mock("next/headers", () => ({
@@ -15,7 +17,7 @@ vi.mock("next/headers", () => ({
 vi.mock("next/cache", () => ({ revalidatePath: () => {}, revalidateTag: () => {} }));
 
 const files = import.meta.glob<{ entries: MatrixEntry[] }>("./matrix/*.matrix.ts", { eager: true });
-const entries = Object.values(files).flatMap((m) => m.entries);
+const entries = Object.values(files).flatMap((m) => m.entries ?? []);
 
 const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"];
 
@@ -55,6 +57,33 @@ describe("authorisation matrix", () => {
     expect(missing, "add these to a tests/integration/security/matrix/*.matrix.ts file").toEqual([]);
   }, 120_000);
 
+  it("lists every page under app/", () => {
+    const listed = new Set(pages.map((p) => p.page));
+    expect(pagesUnderApp().filter((p) => !listed.has(p)), "add these to matrix/pages.matrix.ts").toEqual([]);
+  });
+
+  // Pages first: the route entries change the world (they open shops, end passes…).
+  for (const entry of pages) {
+    it(`${entry.page}: ${entry.what}`, async () => {
+      const wrong: string[] = [];
+      for (const actor of ACTORS) {
+        const want = expectedPage(entry, actor);
+        // A page under a pass writes its visit to the driver's access log; a refusal writes nothing.
+        const before = want !== "200" ? await rowCounts() : undefined;
+        const { outcome, pageAlone } = await renderPage(world, actor, entry);
+        if (outcome !== want) wrong.push(`${actor}: ${outcome}, expected ${want}`);
+        // Next runs a page beside its layouts (it does not wait for the layout's check), so a page refuses by itself too.
+        if (want !== "200" && !want.startsWith("redirect") && pageAlone === "200") wrong.push(`${actor}: the page alone renders (only its layout refuses)`);
+        if (before) {
+          const after = await rowCounts();
+          const changed = Object.keys(before).filter((t) => before[t] !== after[t]);
+          if (changed.length) wrong.push(`${actor}: refused but changed ${changed.map((t) => `${t} ${before[t]}→${after[t]}`).join(", ")}`);
+        }
+      }
+      expect(wrong).toEqual([]);
+    }, 60_000);
+  }
+
   for (const entry of entries) {
     it(`${entry.file} ${entry.exportName}: ${entry.what}`, async () => {
       const wrong: string[] = [];
@@ -79,7 +108,7 @@ describe("authorisation matrix", () => {
 
   it("counts what was checked", () => {
     const cells = entries.length * ACTORS.length;
-    console.log(`authorisation matrix: ${entries.length} route handlers and actions × ${ACTORS.length} actors = ${cells} cells`);
+    console.log(`authorisation matrix: ${entries.length} route handlers and actions × ${ACTORS.length} actors = ${cells} cells; ${pages.length} pages × ${ACTORS.length} actors = ${pages.length * ACTORS.length} cells`);
     expect(cells).toBeGreaterThan(0);
   });
 });

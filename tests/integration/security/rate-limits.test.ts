@@ -3,9 +3,10 @@
 // points (password reset, sign-up, invitation acceptance, the feed, uploads)
 // have limits of their own.
 import { count } from "drizzle-orm";
-import { afterAll, describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it, onTestFinished } from "vitest";
 import { db } from "@/db";
 import { fakeOutbox } from "@/db/schema";
+import { setAuthTimingFloorsForTests } from "@/lib/auth/endpoints";
 import { resetRateLimitsForTests } from "@/lib/rate-limit";
 import { ctx, request, signUp } from "../../support/users";
 
@@ -78,6 +79,9 @@ describe("other entry points", () => {
 
   it("sign-up is limited per address", async () => {
     resetRateLimitsForTests();
+    // Each accepted sign-up waits for the anti-enumeration floor; only the count matters here.
+    setAuthTimingFloorsForTests({ signUpMs: 0 });
+    onTestFinished(() => setAuthTimingFloorsForTests({ signUpMs: 400 }));
     const statuses: number[] = [];
     for (let i = 0; i < 11; i++) {
       const res = await authPost(request("http://fourpatch.test/api/auth/sign-up/email", { peer: "203.0.113.70", body: { name: `Bulk ${i}`, email: `bulk${i}-${Date.now()}@example.test`, password: "long-enough-pass" } }));

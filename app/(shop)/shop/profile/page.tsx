@@ -4,6 +4,7 @@ import { StaffManager } from "@/components/shops/staff-manager";
 import { Alert } from "@/components/ui/alert";
 import { Card, CardTitle } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
+import { NotForThisAccount } from "@/components/shell/not-for-this-account";
 import { getShopForOwner } from "@/db/queries/shops";
 import { membershipsOf, requireSession } from "@/lib/auth/roles";
 import { getSession } from "@/lib/auth/session";
@@ -15,6 +16,8 @@ export const dynamic = "force-dynamic";
 export default async function ShopProfilePage() {
   const session = requireSession(await getSession());
   const shops = await membershipsOf({ userId: session.user.id });
+  // Next runs this page beside the layout's check: refuse here too (the layout shows the same).
+  if (shops.length === 0) return <NotForThisAccount area="shop workspace" home="/vehicles" />;
   const owned = shops.find((s) => s.role === "owner");
   if (!owned) {
     return (
