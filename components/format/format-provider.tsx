@@ -3,10 +3,9 @@
 // them from the request (lib/format/server.ts) and hands them down, so the
 // server's HTML and the browser's first render show the same text.
 import { useRouter } from "next/navigation";
-import { createContext, useContext, useEffect, useMemo, type ReactNode } from "react";
-import { DEFAULT_PREFS, formatter, TIME_ZONE_COOKIE, type FormatPrefs, type Formatter } from "@/lib/format";
-
-const Ctx = createContext<Formatter>(formatter(DEFAULT_PREFS));
+import { useEffect, useMemo, type ReactNode } from "react";
+import { formatter, TIME_ZONE_COOKIE, type FormatPrefs } from "@/lib/format";
+import { FormatContext as Ctx, useFormat } from "./format-context";
 
 export function FormatProvider({ prefs, children }: { prefs: FormatPrefs; children: ReactNode }) {
   const value = useMemo(() => formatter(prefs), [prefs]);
@@ -18,9 +17,7 @@ export function FormatProvider({ prefs, children }: { prefs: FormatPrefs; childr
   );
 }
 
-export function useFormat(): Formatter {
-  return useContext(Ctx);
-}
+export { useFormat };
 
 /**
  * The browser knows its own zone; the server learns it from this cookie. On a

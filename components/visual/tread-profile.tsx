@@ -5,7 +5,7 @@
 // limit. The wear pattern (shoulder, centre, even) and the margin show
 // without a number; the text alternative has the numbers.
 import { cn } from "@/lib/cn";
-import { useFormat } from "@/components/format/format-provider";
+import { useFormat } from "@/components/format/format-context";
 import type { DepthUnit } from "@/lib/units";
 import { asphalt, limitZone } from "@/lib/visual/tokens";
 import { GLYPH_BOX, treadProfileGeometry, treadProfileText, type TreadProfileInput } from "@/lib/visual/tread-profile";
