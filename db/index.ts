@@ -62,10 +62,21 @@ function open(): Client {
     release = acquireDataDirLock(folder);
   }
   let pglite: Embedded;
-  if (thread === "worker") pglite = new PgliteWorkerClient(folder, folder ? options : {});
+  if (thread === "worker") pglite = new PgliteWorkerClient(folder, folder ? options : {}, databaseLost);
   else pglite = folder ? new PGlite(folder, options) : new PGlite();
   const db = drizzlePglite({ client: pglite as PGlite, schema, casing: "snake_case" });
   return { kind: "pglite", db, pglite, thread, release, dataDir };
+}
+
+/**
+ * The database thread died (an uncaught error inside it). A server stops
+ * with the reason, so that its supervisor starts it again (PostgreSQL's
+ * recovery replays the write-ahead log on the next open); elsewhere every
+ * call fails with the reason.
+ */
+function databaseLost(err: Error) {
+  console.error(`\nThe embedded database stopped: ${err.message}\n`);
+  if (process.env.NEXT_RUNTIME === "nodejs") process.exit(1);
 }
 
 function client(): Client {

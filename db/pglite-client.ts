@@ -14,7 +14,7 @@ import path from "node:path";
 import { Worker } from "node:worker_threads";
 import type { PGliteOptions, QueryOptions, Results, Transaction } from "@electric-sql/pglite";
 
-type Pending = { resolve: (value: unknown) => void; reject: (err: Error) => void; stack?: string };
+type Pending = { resolve: (value: unknown) => void; reject: (err: Error) => void; caller: Error };
 
 type ErrorData = { name: string; message: string; stack?: string; fields: Record<string, string | number | boolean | null> };
 
@@ -45,8 +45,12 @@ export function pgliteWorkerPath() {
 /** A probe that only a parser returning its input unchanged gives back. */
 const PROBE = "\u0000fourpatch-raw-probe";
 
+const rawTypesOf = new WeakMap<object, number[]>();
+
 function rawTypes(parsers: QueryOptions["parsers"]): number[] | undefined {
   if (!parsers) return undefined;
+  const known = rawTypesOf.get(parsers);
+  if (known) return known;
   const ids: number[] = [];
   for (const [key, parse] of Object.entries(parsers)) {
     if (parse(PROBE, Number(key)) !== PROBE) {
@@ -54,6 +58,8 @@ function rawTypes(parsers: QueryOptions["parsers"]): number[] | undefined {
     }
     ids.push(Number(key));
   }
+  // drizzle keeps one parsers object per prepared query: judged once.
+  rawTypesOf.set(parsers, ids);
   return ids;
 }
 
@@ -71,8 +77,15 @@ export class PgliteWorkerClient {
   private dead: Error | null = null;
   private closing: Promise<void> | null = null;
 
-  /** dataDir null: an in-memory database. */
-  constructor(dataDir: string | null, options: PGliteOptions = {}) {
+  /**
+   * dataDir null: an in-memory database. onLost: the thread ended without
+   * close() (an uncaught error in it); every pending and later call fails.
+   */
+  constructor(
+    dataDir: string | null,
+    options: PGliteOptions = {},
+    private readonly onLost?: (err: Error) => void,
+  ) {
     this.worker = new Worker(pgliteWorkerPath(), { workerData: { dataDir, options } });
     // Idle, the thread does not keep the process alive (as an in-process PGlite would not).
     this.worker.unref();
@@ -81,7 +94,8 @@ export class PgliteWorkerClient {
       if (!p) return;
       this.settle(msg.id);
       if (msg.ok) p.resolve(msg.value);
-      else p.reject(new PgliteWorkerError(msg.error!, p.stack));
+      // The caller's stack is formatted only now: formatting it for every call would cost more than the query.
+      else p.reject(new PgliteWorkerError(msg.error!, p.caller.stack));
     });
     this.worker.on("error", (err) => this.stop(err));
     this.worker.on("exit", (code) => this.stop(new Error(`The database thread stopped (exit code ${code}).`)));
@@ -93,20 +107,23 @@ export class PgliteWorkerClient {
   }
 
   private stop(err: Error) {
-    if (!this.dead) this.dead = this.closing ? new Error("The database is closed.") : err;
+    if (!this.dead) {
+      this.dead = this.closing ? new Error("The database is closed.") : err;
+      if (!this.closing) this.onLost?.(err);
+    }
     for (const [id, p] of this.pending) {
       this.pending.delete(id);
       p.reject(err);
     }
   }
 
-  private call<T>(msg: Record<string, unknown>, transfer?: []): Promise<T> {
+  private call<T>(msg: Record<string, unknown>): Promise<T> {
     if (this.dead) return Promise.reject(this.dead);
     const id = ++this.seq;
     return new Promise<T>((resolve, reject) => {
       if (this.pending.size === 0) this.worker.ref();
-      this.pending.set(id, { resolve: resolve as (v: unknown) => void, reject, stack: new Error().stack });
-      this.worker.postMessage({ ...msg, id }, transfer);
+      this.pending.set(id, { resolve: resolve as (v: unknown) => void, reject, caller: new Error() });
+      this.worker.postMessage({ ...msg, id });
     });
   }
 

@@ -60,7 +60,7 @@ type Endpoint = {
   okStatus?: number[];
 };
 
-type Result = { name: string; reqs: number; p50: number; p99: number; errors: number; non2xx: number; bytes: number; status: number; ratio?: number; budget?: Endpoint["budget"] };
+type Result = { name: string; threadMsPerReq: number; cpuMsPerReq: number; reqs: number; p50: number; p99: number; errors: number; non2xx: number; bytes: number; status: number; ratio?: number; budget?: Endpoint["budget"] };
 
 function du(dir: string): number {
   return Number(execFileSync("du", ["-sk", dir]).toString().split(/\s/)[0]) * 1024;
@@ -85,6 +85,35 @@ function groupRssPeak(pgid: number): { peakMb: number; pids: number } {
     }
   }
   return { peakMb: peak, pids };
+}
+
+/** Ticks of CPU time (utime + stime) in a /proc stat line. */
+function ticks(statFile: string): number {
+  const stat = fs.readFileSync(statFile, "utf8");
+  const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+  return Number(f[11]) + Number(f[12]);
+}
+
+/**
+ * CPU time of the server (the group's largest process): its request thread
+ * (the main thread) and the whole process, in ms. CPU time, unlike latency,
+ * hardly moves when other work shares the machine.
+ */
+function serverCpu(pgid: number): { threadMs: number; processMs: number } {
+  let best = { rss: 0, pid: 0 };
+  for (const pid of fs.readdirSync("/proc").filter((p) => /^\d+$/.test(p))) {
+    try {
+      const stat = fs.readFileSync(`/proc/${pid}/stat`, "utf8");
+      if (Number(stat.slice(stat.lastIndexOf(")") + 2).split(" ")[2]) !== pgid) continue;
+      const rss = Number(/VmRSS:\s+(\d+) kB/.exec(fs.readFileSync(`/proc/${pid}/status`, "utf8"))?.[1] ?? 0);
+      if (rss > best.rss) best = { rss, pid: Number(pid) };
+    } catch {
+      // Gone meanwhile.
+    }
+  }
+  if (!best.pid) return { threadMs: 0, processMs: 0 };
+  const TICK_MS = 10; // CLK_TCK is 100 on Linux
+  return { threadMs: ticks(`/proc/${best.pid}/task/${best.pid}/stat`) * TICK_MS, processMs: ticks(`/proc/${best.pid}/stat`) * TICK_MS };
 }
 
 function run(cmd: string, args: string[], env: Record<string, string>) {
@@ -223,6 +252,12 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
     log(`[${elapsed()}] loaded ${size} in ${((Date.now() - t0) / 1000).toFixed(0)} s, data folder ${(du(dataDir) / 1e6).toFixed(0)} MB`);
   }
   const fx = JSON.parse(fs.readFileSync(fixtureFile, "utf8")) as Fixture;
+  // Compared runs each start from the loaded data (the POST endpoint adds checks, so a later run would serve a longer logbook).
+  const served = THREADS.length > 1 ? `${dataDir}-served` : dataDir;
+  if (served !== dataDir) {
+    fs.rmSync(served, { recursive: true, force: true });
+    fs.cpSync(dataDir, served, { recursive: true });
+  }
   const base = `http://127.0.0.1:${port}`;
   const server: ChildProcess = spawn("npx", ["next", "start", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: root,
@@ -232,7 +267,7 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
       ...process.env,
       NODE_ENV: "production",
       NEXT_DIST_DIR: DIST,
-      FOURPATCH_DATA_DIR: dataDir,
+      FOURPATCH_DATA_DIR: served,
       DATABASE_URL: "",
       FOURPATCH_PGLITE_THREAD: thread,
       BETTER_AUTH_URL: base,
@@ -295,6 +330,7 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
       // One request first: its status and size, and a warm route.
       const first = await fetch(`${base}${e.path}`, { method: e.method ?? "GET", headers, body: e.body?.() });
       const bytes = (await first.arrayBuffer()).byteLength;
+      const cpu0 = serverCpu(pgid);
       const r = await cannon({
         url: `${base}${e.path}`,
         method: e.method ?? "GET",
@@ -303,11 +339,13 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
         connections: 10,
         duration: SECONDS,
       });
+      const cpu1 = serverCpu(pgid);
+      const done = Math.max(1, r.requests.total);
       const ok = e.okStatus ?? [200];
       // No answer at all within the run is a failure too, not "no errors".
       if (r.requests.total === 0) r.errors += 1;
       const non2xx = ok.includes(304) ? r["3xx"] === 0 ? r.non2xx : r.non2xx - r["3xx"] : r.non2xx;
-      results.push({ name: e.name, reqs: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.timeouts, non2xx, bytes, status: first.status, budget: e.budget });
+      results.push({ name: e.name, threadMsPerReq: (cpu1.threadMs - cpu0.threadMs) / done, cpuMsPerReq: (cpu1.processMs - cpu0.processMs) / done, reqs: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.timeouts, non2xx, bytes, status: first.status, budget: e.budget });
     }
 
     // One heavy request must not stall the rest: the trivial route alone, then beside the heaviest logbook.
@@ -362,10 +400,10 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
   }
   const trivial = results[0]?.reqs || 1;
   for (const r of results) r.ratio = r.reqs / trivial;
-  const size_ = du(dataDir);
-  const walDir = path.join(dataDir, "pg_wal");
+  const size_ = du(served);
+  const walDir = path.join(served, "pg_wal");
   const wal = fs.existsSync(walDir) ? du(walDir) : 0;
-  const explains = QUICK ? [] : await explainAll(dataDir, fx);
+  const explains = QUICK ? [] : await explainAll(served, fx);
   return { size, thread, results, peak, dataBytes: size_, walBytes: wal, explains, stall, firstLoad };
 }
 
@@ -403,10 +441,12 @@ async function main() {
       runs.push(out);
       const label = THREADS.length > 1 || thread !== "worker" ? `${size}, PGlite in the ${thread} thread` : size;
       log(`\n== ${label} data set (${SECONDS} s per endpoint, 10 connections, loopback; the machine may be shared: compare ratios)`);
-      log(`${pad("endpoint", 34)} ${pad("status", 6, true)} ${pad("bytes", 9, true)} ${pad("req/s", 8, true)} ${pad("p50 ms", 7, true)} ${pad("p99 ms", 7, true)} ${pad("errors", 7, true)} ${pad("ratio", 7, true)}`);
+      log(
+        `${pad("endpoint", 34)} ${pad("status", 6, true)} ${pad("bytes", 9, true)} ${pad("req/s", 8, true)} ${pad("p50 ms", 7, true)} ${pad("p99 ms", 7, true)} ${pad("errors", 7, true)} ${pad("ratio", 7, true)} ${pad("CPU ms/req: request thread", 27, true)} ${pad("process", 8, true)}`,
+      );
       for (const r of out.results) {
         log(
-          `${pad(r.name, 34)} ${pad(r.status, 6, true)} ${pad(r.bytes, 9, true)} ${pad(r.reqs.toFixed(1), 8, true)} ${pad(r.p50, 7, true)} ${pad(r.p99, 7, true)} ${pad(r.errors + r.non2xx, 7, true)} ${pad(`${r.ratio!.toFixed(3)}×`, 7, true)}`,
+          `${pad(r.name, 34)} ${pad(r.status, 6, true)} ${pad(r.bytes, 9, true)} ${pad(r.reqs.toFixed(1), 8, true)} ${pad(r.p50, 7, true)} ${pad(r.p99, 7, true)} ${pad(r.errors + r.non2xx, 7, true)} ${pad(`${r.ratio!.toFixed(3)}×`, 7, true)} ${pad(r.threadMsPerReq.toFixed(1), 27, true)} ${pad(r.cpuMsPerReq.toFixed(1), 8, true)}`,
         );
         const b = r.budget;
         const want = b ? (size === "demo" ? b.demo : b.large) : undefined;
@@ -444,7 +484,14 @@ async function main() {
       const bySize = runs.filter((r) => r.size === size);
       log(`${size}:`);
       for (const [i, r0] of bySize[0].results.entries()) {
-        log(`  ${pad(r0.name, 34)} ${bySize.map((r) => `${r.thread}: ${pad(r.results[i]?.reqs.toFixed(1) ?? "-", 7, true)} req/s p50 ${pad(r.results[i]?.p50 ?? "-", 5, true)} ms (${r.results[i]?.ratio?.toFixed(3)}×)`).join("   ")}`);
+        log(
+          `  ${pad(r0.name, 34)} ${bySize
+            .map((r) => {
+              const x = r.results[i];
+              return `${r.thread}: ${pad(x?.reqs.toFixed(1) ?? "-", 6, true)} req/s ${pad(`${x?.ratio?.toFixed(3)}×`, 7, true)}, request thread ${pad(x?.threadMsPerReq.toFixed(1) ?? "-", 5, true)} ms CPU/req`;
+            })
+            .join("   ")}`,
+        );
       }
       log(`  ${pad("trivial beside heaviest: p50/p99", 34)} ${bySize.map((r) => `${r.thread}: ${r.stall?.besideP50}/${r.stall?.besideP99} ms`).join("   ")}`);
       log(`  ${pad("peak RSS", 34)} ${bySize.map((r) => `${r.thread}: ${r.peak.toFixed(0)} MB`).join("   ")}`);

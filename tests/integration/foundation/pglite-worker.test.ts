@@ -226,6 +226,16 @@ describe("PGlite in a worker thread, compared with PGlite in the main thread", (
     expect((await worker.query("select 1 as one", [], { parsers: { 23: (v: string) => v } })).rows).toEqual([{ one: "1" }]);
   });
 
+  it("a thread that ends without close() fails the pending and every later call with the reason, and reports it once", async () => {
+    const lost: Error[] = [];
+    const c = new PgliteWorkerClient(null, {}, (e) => lost.push(e));
+    const pending = c.query("select 1");
+    await (c as unknown as { worker: { terminate(): Promise<number> } }).worker.terminate();
+    await expect(pending).rejects.toThrow(/database thread stopped/);
+    await expect(c.query("select 1")).rejects.toThrow(/database thread stopped/);
+    expect(lost).toHaveLength(1);
+  });
+
   it("dumps the database as PGlite does (the backup), and refuses calls once closed", async () => {
     const dump = await worker.dumpDataDir("gzip");
     const restored = new PGlite({ loadDataDir: dump });
