@@ -2,8 +2,8 @@ import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import { connection } from "next/server";
 import type { ReactNode } from "react";
-import { AppToaster } from "@/components/ui/toaster";
 import { FormatProvider } from "@/components/format/format-provider";
+import { LazyToaster } from "@/components/ui/lazy-toaster";
 import { viewerPrefs } from "@/lib/format/server";
 import "./globals.css";
 
@@ -36,7 +36,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
     <html lang="en" className={`${sans.variable} ${mono.variable}`}>
       <body className="min-h-dvh font-sans">
         <FormatProvider prefs={prefs}>{children}</FormatProvider>
-        <AppToaster />
+        <LazyToaster />
       </body>
     </html>
   );

@@ -1,6 +1,10 @@
 // The one database client of a process. PGlite in a data folder by default
 // (guarded by an exclusive lock), in memory for tests and the build phase,
-// and a real PostgreSQL server when DATABASE_URL is set.
+// and a real PostgreSQL server when DATABASE_URL is set. PGlite runs in a
+// worker thread (db/pglite-worker.mjs, spoken to through
+// db/pglite-client.ts) unless FOURPATCH_PGLITE_THREAD=main: its queries are
+// WebAssembly that would otherwise run on the request thread and stall
+// every other request while they run.
 import fs from "node:fs";
 import path from "node:path";
 import { PGlite } from "@electric-sql/pglite";
@@ -11,13 +15,17 @@ import { migrate as migratePg } from "drizzle-orm/node-postgres/migrator";
 import pg from "pg";
 import { env } from "@/lib/env";
 import { acquireDataDirLock } from "./lock";
+import { PgliteWorkerClient } from "./pglite-client";
 import * as schema from "./schema";
 
 export type Database = PgliteDatabase<typeof schema>;
 export type Transaction = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
+/** What this module calls on PGlite; the worker client implements the same. */
+type Embedded = Pick<PGlite, "exec" | "query" | "dumpDataDir" | "close">;
+
 type Client =
-  | { kind: "pglite"; db: Database; pglite: PGlite; release: () => void; dataDir: string }
+  | { kind: "pglite"; db: Database; pglite: Embedded; thread: "worker" | "main"; release: () => void; dataDir: string }
   | { kind: "pg"; db: Database; pool: pg.Pool };
 
 const globalForDb = globalThis as unknown as { __fourpatchDb?: Client; __fourpatchMigrated?: Promise<void> };
@@ -37,23 +45,38 @@ function open(): Client {
     return { kind: "pg", db, pool };
   }
   const dataDir = dataDirFromEnv();
+  // The build phase never queries: no thread for it.
+  const thread = process.env.NEXT_PHASE === "phase-production-build" ? "main" : env().FOURPATCH_PGLITE_THREAD;
   let release = () => {};
-  let pglite: PGlite;
-  if (dataDir.startsWith("memory://")) {
-    pglite = new PGlite();
-  } else {
-    const dir = path.resolve(/*turbopackIgnore: true*/ dataDir);
+  let folder: string | null = null;
+  // PGlite runs PostgreSQL in single-user mode: no checkpointer, no
+  // autovacuum. The write-ahead log only shrinks at a CHECKPOINT, which
+  // db/maintenance.ts runs after bulk changes and on a timer; these bound
+  // what a checkpoint keeps.
+  const options = { postgresqlconf: ["max_wal_size = 64MB", "min_wal_size = 32MB"] };
+  if (!dataDir.startsWith("memory://")) {
+    folder = path.resolve(/*turbopackIgnore: true*/ dataDir);
     // Created first, so that the lock is named after the folder's real path.
-    fs.mkdirSync(dir, { recursive: true });
-    release = acquireDataDirLock(dir);
-    // PGlite runs PostgreSQL in single-user mode: no checkpointer, no
-    // autovacuum. The write-ahead log only shrinks at a CHECKPOINT, which
-    // db/maintenance.ts runs after bulk changes and on a timer; these bound
-    // what a checkpoint keeps.
-    pglite = new PGlite(dir, { postgresqlconf: ["max_wal_size = 64MB", "min_wal_size = 32MB"] });
+    fs.mkdirSync(folder, { recursive: true });
+    // Taken by this process before the database opens, whichever thread opens it.
+    release = acquireDataDirLock(folder);
   }
-  const db = drizzlePglite({ client: pglite, schema, casing: "snake_case" });
-  return { kind: "pglite", db, pglite, release, dataDir };
+  let pglite: Embedded;
+  if (thread === "worker") pglite = new PgliteWorkerClient(folder, folder ? options : {}, databaseLost);
+  else pglite = folder ? new PGlite(folder, options) : new PGlite();
+  const db = drizzlePglite({ client: pglite as PGlite, schema, casing: "snake_case" });
+  return { kind: "pglite", db, pglite, thread, release, dataDir };
+}
+
+/**
+ * The database thread died (an uncaught error inside it). A server stops
+ * with the reason, so that its supervisor starts it again (PostgreSQL's
+ * recovery replays the write-ahead log on the next open); elsewhere every
+ * call fails with the reason.
+ */
+function databaseLost(err: Error) {
+  console.error(`\nThe embedded database stopped: ${err.message}\n`);
+  if (process.env.NEXT_RUNTIME === "nodejs") process.exit(1);
 }
 
 function client(): Client {
@@ -78,6 +101,12 @@ export const migrationsFolder = path.join(process.cwd(), "db/migrations");
 /** Which engine the process uses: embedded PGlite or a PostgreSQL server. */
 export function databaseKind(): "pglite" | "pg" {
   return client().kind;
+}
+
+/** Where the embedded database runs: its own worker thread, the main thread, or a PostgreSQL server. */
+export function databaseThread(): "worker" | "main" | "server" {
+  const c = client();
+  return c.kind === "pg" ? "server" : c.thread;
 }
 
 /** Runs a statement outside the query builder (maintenance: ANALYZE, VACUUM, CHECKPOINT). */
@@ -122,8 +151,11 @@ export async function closeDb() {
   globalForDb.__fourpatchMigrated = undefined;
   if (c.kind === "pg") await c.pool.end();
   else {
-    await c.pglite.close();
-    c.release();
+    try {
+      await c.pglite.close();
+    } finally {
+      c.release();
+    }
   }
 }
 

@@ -9,6 +9,9 @@ const schema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   // Where PGlite keeps its files; `memory://` for an in-memory database.
   FOURPATCH_DATA_DIR: z.preprocess(blankToUndefined, z.string().default("./data")),
+  // Where PGlite's WebAssembly runs: in a worker thread (default), so that a
+  // heavy query never freezes the request thread, or in the server's own thread.
+  FOURPATCH_PGLITE_THREAD: z.preprocess(blankToUndefined, z.enum(["worker", "main"]).default("worker")),
   // When set, a real PostgreSQL server is used instead of PGlite.
   DATABASE_URL: optional(),
   BETTER_AUTH_SECRET: optional(),

@@ -22,7 +22,7 @@ import type { VehicleLogbook } from "@/db/queries/logbook";
 import { useFormat } from "@/components/format/format-provider";
 import type { Formatter } from "@/lib/format";
 import type { DepthUnit, DistanceUnit } from "@/lib/units";
-import { POSITION_LABELS, SERVICE_KIND_LABELS } from "@/lib/validation/logbook";
+import { POSITION_LABELS, SERVICE_KIND_LABELS } from "@/lib/validation/labels";
 import { setTitle } from "./format";
 
 export type HistoryRow = {

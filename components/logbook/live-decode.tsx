@@ -4,7 +4,7 @@
 import { AlertTriangle, CheckCircle2, XCircle } from "lucide-react";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { ageCondition, checkFit, decodeDotCode, loadIndexKg, overallDiameter, parseTireSize, speedSymbolKmh, type FitStatus, type SetKind } from "@/lib/tires";
-import { todayIso } from "@/lib/validation/logbook";
+import { todayIso } from "@/lib/validation/labels";
 import { useFormat } from "@/components/format/format-provider";
 
 export function DotPreview({ code, kind, id }: { code: string | undefined; kind: SetKind; id?: string }) {

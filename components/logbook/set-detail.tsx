@@ -15,7 +15,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetDetail } from "@/db/queries/logbook";
 import { depthUnitFor, } from "@/lib/units";
-import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/logbook";
+import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/labels";
 import { api, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";

@@ -14,7 +14,7 @@ import { FormActions } from "@/components/ui/form-actions";
 import type { SetKind } from "@/lib/tires";
 import type { TireView } from "@/db/queries/logbook-view";
 import type { DepthUnit } from "@/lib/units";
-import { POSITION_LABELS, POSITIONS, type PositionValue } from "@/lib/validation/logbook";
+import { POSITION_LABELS, POSITIONS, type PositionValue } from "@/lib/validation/labels";
 import { api, ApiError, keys } from "./api";
 import { DotPreview } from "./live-decode";
 import { useFormat } from "@/components/format/format-provider";

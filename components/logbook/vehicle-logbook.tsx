@@ -21,7 +21,7 @@ import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
 import { depthUnitFor } from "@/lib/units";
 import type { SetKind } from "@/lib/tires";
-import { SET_KIND_LABELS, todayIso } from "@/lib/validation/logbook";
+import { SET_KIND_LABELS, todayIso } from "@/lib/validation/labels";
 import { api, ApiError, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";

@@ -8,7 +8,7 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
 import { decodeDotCode, tireAge } from "@/lib/tires";
-import { POSITION_LABELS, SET_KIND_LABELS, SET_KIND_VALUES, type PositionValue } from "@/lib/validation/logbook";
+import { POSITION_LABELS, SET_KIND_LABELS, SET_KIND_VALUES, type PositionValue } from "@/lib/validation/labels";
 import { sendJson } from "./api";
 
 const FOUR: PositionValue[] = ["front_left", "front_right", "rear_left", "rear_right"];

@@ -8,7 +8,7 @@ import { toast } from "sonner";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { POSITION_LABELS, SERVICE_KIND_LABELS, SERVICE_KINDS, type PositionValue } from "@/lib/validation/logbook";
+import { POSITION_LABELS, SERVICE_KIND_LABELS, SERVICE_KINDS, type PositionValue } from "@/lib/validation/labels";
 import { sendJson } from "./api";
 
 type TireRow = { id: string; position: PositionValue };

@@ -6,7 +6,7 @@ import { Clock } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import { cn } from "@/lib/cn";
-import { formatTimeLeft } from "@/lib/validation/passes";
+import { formatTimeLeft } from "@/lib/time-left";
 
 export function TimeLeft({ endsAt, serverNow, className, refreshOnEnd = true, onDark = false }: { endsAt: string; serverNow: string; className?: string; refreshOnEnd?: boolean; onDark?: boolean }) {
   const router = useRouter();

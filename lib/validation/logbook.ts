@@ -38,40 +38,10 @@ export const isoDate = z.string().refine(isIsoDate, "Enter a date as YYYY-MM-DD.
 const optDate = z.preprocess(blank, isoDate.optional());
 export const id = z.string().uuid("This reference is not valid.");
 
-/** The local calendar date; forms and handlers both use it to refuse dates in the future. */
-export function todayIso(now = new Date()): string {
-  const y = now.getFullYear();
-  const m = String(now.getMonth() + 1).padStart(2, "0");
-  const d = String(now.getDate()).padStart(2, "0");
-  return `${y}-${m}-${d}`;
-}
-
-export const SET_KIND_VALUES = ["summer", "all_season", "all_weather", "winter"] as const;
-export const SET_KIND_LABELS: Record<(typeof SET_KIND_VALUES)[number], string> = {
-  summer: "Summer",
-  all_season: "All-season",
-  all_weather: "All-weather",
-  winter: "Winter",
-};
-export const POSITIONS = ["front_left", "front_right", "rear_left", "rear_right", "spare"] as const;
-export type PositionValue = (typeof POSITIONS)[number];
-export const POSITION_LABELS: Record<PositionValue, string> = {
-  front_left: "Front left",
-  front_right: "Front right",
-  rear_left: "Rear left",
-  rear_right: "Rear right",
-  spare: "Spare",
-};
-export const SERVICE_KINDS = ["fitting", "seasonal_swap", "rotation", "balancing", "alignment", "puncture_repair", "inspection"] as const;
-export const SERVICE_KIND_LABELS: Record<(typeof SERVICE_KINDS)[number], string> = {
-  fitting: "Fitting",
-  seasonal_swap: "Seasonal swap",
-  rotation: "Rotation",
-  balancing: "Balancing",
-  alignment: "Alignment",
-  puncture_repair: "Puncture repair",
-  inspection: "Inspection",
-};
+// Labels and lists the browser shows live in ./labels (no zod), so pages that
+// only show them do not ship the validation library.
+export { todayIso, SET_KIND_VALUES, SET_KIND_LABELS, POSITIONS, POSITION_LABELS, SERVICE_KINDS, SERVICE_KIND_LABELS, type PositionValue } from "./labels";
+import { POSITIONS, SERVICE_KINDS, SET_KIND_VALUES, todayIso } from "./labels";
 
 const depthUnit = z.enum(["mm", "32nds"]).default("mm");
 const distanceUnit = z.enum(["km", "mi"]).default("km");

@@ -5,25 +5,11 @@ import { decimalFromText } from "./text";
 
 const HOUR_MS = 60 * 60 * 1000;
 
-/** Preset lengths offered first; a custom length may go up to 30 days. */
-export const PASS_PRESETS = [
-  { value: "4h", label: "4 hours", hours: 4 },
-  { value: "8h", label: "A working day (8 hours)", hours: 8 },
-  { value: "24h", label: "24 hours", hours: 24 },
-  { value: "3d", label: "3 days", hours: 72 },
-  { value: "7d", label: "7 days", hours: 168 },
-] as const;
-
 export const MAX_PASS_DAYS = 30;
 export const MAX_PASS_MS = MAX_PASS_DAYS * 24 * HOUR_MS;
 
-export const passScopes = ["view", "view_add"] as const;
-export type PassScope = (typeof passScopes)[number];
-
-export const SCOPE_LABEL: Record<PassScope, string> = {
-  view: "Read only",
-  view_add: "Read and add entries",
-};
+export { PASS_PRESETS, passScopes, SCOPE_LABEL, type PassScope } from "./labels";
+import { PASS_PRESETS, passScopes } from "./labels";
 
 const presetValues = PASS_PRESETS.map((p) => p.value) as unknown as ["4h", "8h", "24h", "3d", "7d"];
 
@@ -91,15 +77,5 @@ export function passEndedAt(p: { endsAt: Date; revokedAt: Date | null }): Date {
   return p.revokedAt && p.revokedAt < p.endsAt ? p.revokedAt : p.endsAt;
 }
 
-/** "2 days 3 hours", "5 hours 10 min", "12 min": what is left, for people. */
-export function formatTimeLeft(ms: number): string {
-  if (ms <= 0) return "ended";
-  const min = Math.floor(ms / 60_000);
-  const days = Math.floor(min / (24 * 60));
-  const hours = Math.floor((min % (24 * 60)) / 60);
-  const mins = min % 60;
-  const plural = (n: number, w: string) => `${n} ${w}${n === 1 ? "" : "s"}`;
-  if (days > 0) return hours > 0 ? `${plural(days, "day")} ${plural(hours, "hour")}` : plural(days, "day");
-  if (hours > 0) return mins > 0 ? `${plural(hours, "hour")} ${mins} min` : plural(hours, "hour");
-  return min > 0 ? `${mins} min` : "less than a minute";
-}
+// Kept in its own module (no zod) so the pass timer does not ship the validation library to the browser.
+export { formatTimeLeft } from "@/lib/time-left";

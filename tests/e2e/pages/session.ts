@@ -20,6 +20,9 @@ export class SessionPages {
   async signOut() {
     await this.page.getByRole("button", { name: "Sign out" }).click();
     await expect(this.page).toHaveURL(/\/sign-in/);
+    // Ended on the server too, not only a page change: the browser's cookie no longer opens a session.
+    const session = await this.page.request.get("/api/auth/get-session");
+    expect(await session.json()).toBeNull();
   }
 }
 

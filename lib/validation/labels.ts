@@ -1,0 +1,56 @@
+// What the browser shows of the logbook's and passes' fixed values: labels,
+// lists and the local date. No zod here: client components that only show
+// these import this module, and the validation library stays off their pages.
+
+/** The local calendar date; forms and handlers both use it to refuse dates in the future. */
+export function todayIso(now = new Date()): string {
+  const y = now.getFullYear();
+  const m = String(now.getMonth() + 1).padStart(2, "0");
+  const d = String(now.getDate()).padStart(2, "0");
+  return `${y}-${m}-${d}`;
+}
+
+export const SET_KIND_VALUES = ["summer", "all_season", "all_weather", "winter"] as const;
+export const SET_KIND_LABELS: Record<(typeof SET_KIND_VALUES)[number], string> = {
+  summer: "Summer",
+  all_season: "All-season",
+  all_weather: "All-weather",
+  winter: "Winter",
+};
+export const POSITIONS = ["front_left", "front_right", "rear_left", "rear_right", "spare"] as const;
+export type PositionValue = (typeof POSITIONS)[number];
+export const POSITION_LABELS: Record<PositionValue, string> = {
+  front_left: "Front left",
+  front_right: "Front right",
+  rear_left: "Rear left",
+  rear_right: "Rear right",
+  spare: "Spare",
+};
+export const SERVICE_KINDS = ["fitting", "seasonal_swap", "rotation", "balancing", "alignment", "puncture_repair", "inspection"] as const;
+export const SERVICE_KIND_LABELS: Record<(typeof SERVICE_KINDS)[number], string> = {
+  fitting: "Fitting",
+  seasonal_swap: "Seasonal swap",
+  rotation: "Rotation",
+  balancing: "Balancing",
+  alignment: "Alignment",
+  puncture_repair: "Puncture repair",
+  inspection: "Inspection",
+};
+
+
+/** Preset lengths offered first; a custom length may go up to 30 days. */
+export const PASS_PRESETS = [
+  { value: "4h", label: "4 hours", hours: 4 },
+  { value: "8h", label: "A working day (8 hours)", hours: 8 },
+  { value: "24h", label: "24 hours", hours: 24 },
+  { value: "3d", label: "3 days", hours: 72 },
+  { value: "7d", label: "7 days", hours: 168 },
+] as const;
+
+export const passScopes = ["view", "view_add"] as const;
+export type PassScope = (typeof passScopes)[number];
+
+export const SCOPE_LABEL: Record<PassScope, string> = {
+  view: "Read only",
+  view_add: "Read and add entries",
+};
