@@ -16,9 +16,11 @@ export CRON_SECRET="e2e-cron-secret"
 export FOURPATCH_DEV_FAKES="on"
 unset DATABASE_URL RESEND_API_KEY STRIPE_SECRET_KEY
 
-rm -rf "$FOURPATCH_DATA_DIR"
 if [ "${E2E_SKIP_BUILD:-0}" != "1" ] || [ ! -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
   npx next build >/dev/null
 fi
+# `npm test` builds ahead, beside the integration runs, with this switch.
+if [ "${E2E_BUILD_ONLY:-0}" = "1" ]; then exit 0; fi
+rm -rf "$FOURPATCH_DATA_DIR"
 npm run --silent db:seed
 exec npx next start -p "$PORT"

@@ -22,9 +22,13 @@ run npx vitest run --project unit --coverage
 # The two integration runs side by side: each is one test file at a time,
 # and PGlite's runs and the PostgreSQL server's seldom want a core at once
 # (about 6.5 min together against about 9 one after the other, on 2 cores).
-step "integration tests on PGlite and on a real PostgreSQL server (side by side)"
-INT_PGLITE=$(mktemp) INT_PG=$(mktemp)
-trap 'rm -f "$LOG" "$INT_PGLITE" "$INT_PG"' EXIT
+# The browser tests' production build goes alongside too: the PostgreSQL run
+# ends minutes before the PGlite one and leaves a core free for it.
+step "integration tests on PGlite and on a real PostgreSQL server, and the browser tests' build (side by side)"
+INT_PGLITE=$(mktemp) INT_PG=$(mktemp) E2E_BUILD=$(mktemp)
+trap 'rm -f "$LOG" "$INT_PGLITE" "$INT_PG" "$E2E_BUILD"' EXIT
+E2E_BUILD_ONLY=1 bash scripts/e2e-server.sh "${E2E_PORT:-3210}" >"$E2E_BUILD" 2>&1 &
+build_pid=$!
 npx vitest run --project integration >"$INT_PGLITE" 2>&1 &
 pglite_pid=$!
 bash scripts/with-postgres.sh npx vitest run --project integration >"$INT_PG" 2>&1 &
@@ -40,8 +44,15 @@ if [ "$pglite_rc" != 0 ] || [ "$pg_rc" != 0 ]; then
   echo "Integration tests failed (PGlite: exit $pglite_rc, PostgreSQL: exit $pg_rc)." >&2
   exit 1
 fi
-step "browser tests in Chromium"
-run bash scripts/e2e.sh
+build_rc=0
+wait "$build_pid" || build_rc=$?
+if [ "$build_rc" != 0 ]; then
+  cat "$E2E_BUILD" >&2
+  echo "The production build for the browser tests failed (exit $build_rc)." >&2
+  exit 1
+fi
+step "browser tests in Chromium (on the build made above)"
+run env E2E_SKIP_BUILD=1 bash scripts/e2e.sh
 
 # Every step passed (set -e), so the count of failures is zero by construction;
 # the passed count adds up vitest's "Tests N passed" and Playwright's "N passed".
