@@ -1,6 +1,6 @@
 "use client";
 // The access log as the driver reads it: who, from which shop, did what, when.
-import { useFormat } from "@/components/format/format-provider";
+import { useFormat } from "@/components/format/format-context";
 
 const ACTION_LABEL: Record<string, string> = {
   read_logbook: "Opened the logbook",
@@ -50,7 +50,7 @@ export function AccessLogTable({ rows }: { rows: AccessRow[] }) {
                 {r.count && r.count > 1 ? (
                   <span className="text-asphalt-600">
                     {" "}
-                    · {f.count(r.count, { one: "# time", other: "# times" })}{r.lastAt ? `, last ${f.dateTime(r.lastAt)}` : ""}
+                    · {f.count(r.count, { one: "time", other: "times" })}{r.lastAt ? `, last ${f.dateTime(r.lastAt)}` : ""}
                   </span>
                 ) : null}
               </td>
