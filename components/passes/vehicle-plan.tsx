@@ -8,7 +8,7 @@ import { ConditionBadge } from "@/components/ui/condition-badge";
 import { TireTreadProfile } from "@/components/visual/tread-profile";
 import type { TireView } from "@/db/queries/logbook-view";
 import { cn } from "@/lib/cn";
-import { DEFAULT_PREFS, formatter } from "@/lib/format";
+import type { Formatter } from "@/lib/format";
 import type { DepthUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/logbook";
 
@@ -26,7 +26,7 @@ function dotWeek(t: TireView) {
   return "Date unknown";
 }
 
-function WheelStation({ tire, side, limitMm, depthUnit, measurable }: { tire: TireView; side: Side; limitMm: number; depthUnit: DepthUnit; measurable: boolean }) {
+function WheelStation({ tire, side, limitMm, depthUnit, measurable, f }: { tire: TireView; side: Side; limitMm: number; depthUnit: DepthUnit; measurable: boolean; f: Formatter }) {
   // Inner toward the centreline: on the left wheels that is the glyph's right side.
   const innerSide: Side = side === "left" ? "right" : "left";
   const near = side === "left" ? "items-end text-right" : "items-start text-left";
@@ -47,13 +47,13 @@ function WheelStation({ tire, side, limitMm, depthUnit, measurable }: { tire: Ti
         </figure>
         <div className={cn("flex min-w-0 flex-col gap-1", near)}>
           <p className="text-sm text-asphalt-800">
-            <span className="tabular-nums font-semibold">{tire.depthMm != null ? formatDepth(tire.depthMm, depthUnit) : "—"}</span>{" "}
-            <span className="whitespace-nowrap text-asphalt-600">{tire.latest ? `checked ${tire.latest.checkedOn}` : "no check yet"}</span>
+            <span className="tabular-nums font-semibold">{tire.depthMm != null ? f.depth(tire.depthMm, depthUnit) : "—"}</span>{" "}
+            <span className="whitespace-nowrap text-asphalt-600">{tire.latest ? `checked ${f.date(tire.latest.checkedOn)}` : "no check yet"}</span>
           </p>
           <p className="break-words font-mono text-xs tracking-tight sm:text-sm sm:tracking-normal">{tire.dotCode ?? "No DOT code logged"}</p>
           <p className="text-xs text-asphalt-700 sm:text-sm">
             {dotWeek(tire)}
-            {tire.age ? <span className="whitespace-nowrap">{` · ${tire.age.years} y ${tire.age.months} m old`}</span> : null}
+            {tire.age ? <span>{` · ${f.age(tire.age)}`}</span> : null}
           </p>
         </div>
       </div>
@@ -68,9 +68,9 @@ function WheelStation({ tire, side, limitMm, depthUnit, measurable }: { tire: Ti
 }
 
 // Shared by server and client components: depths need no zone, so the default formatter does.
-const formatDepth = (mm: number | null | undefined, unit: DepthUnit) => formatter(DEFAULT_PREFS).depth(mm, unit);
 
-export function VehiclePlan({ tires, limitMm, depthUnit, measurable }: { tires: TireView[]; limitMm: number; depthUnit: DepthUnit; measurable: boolean }) {
+/** `f` is the viewer's formatter (lib/format/server.ts): dates, ages and depths as the technician writes them. */
+export function VehiclePlan({ tires, limitMm, depthUnit, measurable, f }: { tires: TireView[]; limitMm: number; depthUnit: DepthUnit; measurable: boolean; f: Formatter }) {
   const at = (p: string) => tires.find((t) => t.position === p);
   const extra = tires.filter((t) => !WHEELS.some((w) => w.position === t.position));
   return (
@@ -88,7 +88,7 @@ export function VehiclePlan({ tires, limitMm, depthUnit, measurable }: { tires: 
           const place = cn(w.side === "left" ? "col-start-1" : "col-start-3", w.axle === "front" ? "row-start-1" : "row-start-2");
           return t ? (
             <div key={w.position} className={place}>
-              <WheelStation tire={t} side={w.side} limitMm={limitMm} depthUnit={depthUnit} measurable={measurable} />
+              <WheelStation tire={t} side={w.side} limitMm={limitMm} depthUnit={depthUnit} measurable={measurable} f={f} />
             </div>
           ) : (
             <p key={w.position} className={cn(place, "self-center rounded-lg border border-dashed border-asphalt-300 p-3 text-sm text-asphalt-600")}>
@@ -100,12 +100,12 @@ export function VehiclePlan({ tires, limitMm, depthUnit, measurable }: { tires: 
       {extra.length ? (
         <div className="grid gap-3 sm:grid-cols-2">
           {extra.map((t) => (
-            <WheelStation key={t.id} tire={t} side="right" limitMm={limitMm} depthUnit={depthUnit} measurable={measurable} />
+            <WheelStation key={t.id} tire={t} side="right" limitMm={limitMm} depthUnit={depthUnit} measurable={measurable} f={f} />
           ))}
         </div>
       ) : null}
       <p className="text-xs text-asphalt-600">
-        Each tire is drawn in cross-section: its inner, centre and outer grooves as bars against the dashed depth when new; the shaded band is below the set&apos;s limit of {formatDepth(limitMm, depthUnit)}.
+        Each tire is drawn in cross-section: its inner, centre and outer grooves as bars against the dashed depth when new; the shaded band is below the set&apos;s limit of {f.depth(limitMm, depthUnit)}.
       </p>
     </div>
   );

@@ -77,7 +77,7 @@ export default async function PassLogbookPage({ params }: { params: Promise<{ pa
           On the car{onCar ? `: ${setTitle(onCar)} · ${onCar.size}` : ""}
         </h2>
         {onCar ? (
-          <VehiclePlan tires={onCar.tires} limitMm={onCar.limit.minMm} depthUnit={depthUnit} measurable={canAdd} />
+          <VehiclePlan tires={onCar.tires} limitMm={onCar.limit.minMm} depthUnit={depthUnit} measurable={canAdd} f={f} />
         ) : (
           <p className="text-asphalt-600">The logbook has no set on the car.</p>
         )}
