@@ -73,7 +73,7 @@ test("the technician's view of the demo pass at tablet and phone widths", async 
       await expect(wheel.getByRole("img", { name: /^Tread profile: inner/ })).toHaveAttribute("data-inner-side", inner);
       // Ages in words ("3 years, 6 months old"), the check's date as the viewer writes dates, never ISO.
       await expect(wheel).toContainText(/Week \d+ of \d{4} · (\d+ years?, )?\d+ months? old|Week \d+ of \d{4} · \d+ years? old/);
-      await expect(wheel).toContainText(/checked \d{1,2} [A-Z][a-z]{2} \d{4}/);
+      await expect(wheel).toContainText(/checked (\d{1,2} [A-Z][a-z]{2} \d{4}|[A-Z][a-z]{2} \d{1,2}, \d{4})/);
       await expect(wheel).not.toContainText(/\d{4}-\d\d-\d\d/);
     }
     // The front-left wheel sits left of and above the rear-right one: a plan, not a list.
