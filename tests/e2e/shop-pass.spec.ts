@@ -90,6 +90,8 @@ test("a driver shares a logbook with a shop, the technician adds to it, and the 
 test("the shop owner sees the shop's passes, its profile and its staff", async ({ page }) => {
   await new SessionPages(page).signInAndLand(demoAccounts.wren.email, "/shop");
   await expect(page.getByRole("heading", { name: "Passes at Quillby Tread Works" })).toBeVisible();
+  // No ISO dates anywhere on the shop's home (its record of work once showed them).
+  await expect(page.locator("main")).not.toContainText(/\b20\d\d-\d\d-\d\d\b/);
   await page.goto("/shop/profile");
   await expect(page.getByRole("heading", { name: /profile and staff/ })).toBeVisible();
   await expect(page.getByText(demoAccounts.jo.email)).toBeVisible();

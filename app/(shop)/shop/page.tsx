@@ -132,7 +132,7 @@ export default async function ShopHomePage({ searchParams }: { searchParams: Pro
                     <span className="font-semibold">{SERVICE_KIND_LABELS[w.kind]}</span> · {w.make} {w.model}
                   </span>
                   <span className="text-sm text-asphalt-600">
-                    {w.performedOn} · {w.technician ?? "former staff"}
+                    {f.date(w.performedOn)} · {w.technician ?? "former staff"}
                   </span>
                 </li>
               ))}
