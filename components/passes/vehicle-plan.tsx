@@ -48,7 +48,7 @@ function WheelStation({ tire, side, limitMm, depthUnit, measurable, f }: { tire:
         <div className={cn("flex min-w-0 flex-col gap-1", near)}>
           <p className="text-sm text-asphalt-800">
             <span className="tabular-nums font-semibold">{tire.depthMm != null ? f.depth(tire.depthMm, depthUnit) : "—"}</span>{" "}
-            <span className="whitespace-nowrap text-asphalt-600">{tire.latest ? `checked ${f.date(tire.latest.checkedOn)}` : "no check yet"}</span>
+            <span className="text-asphalt-600">{tire.latest ? `checked ${f.date(tire.latest.checkedOn)}` : "no check yet"}</span>
           </p>
           <p className="break-words font-mono text-xs tracking-tight sm:text-sm sm:tracking-normal">{tire.dotCode ?? "No DOT code logged"}</p>
           <p className="text-xs text-asphalt-700 sm:text-sm">
