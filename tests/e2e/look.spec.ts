@@ -75,6 +75,15 @@ test("the technician's view of the demo pass at tablet and phone widths", async 
       await expect(wheel).toContainText(/Week \d+ of \d{4} · (\d+ years?, )?\d+ months? old|Week \d+ of \d{4} · \d+ years? old/);
       await expect(wheel).toContainText(/checked (\d{1,2} [A-Z][a-z]{2} \d{4}|[A-Z][a-z]{2} \d{1,2}, \d{4})/);
       await expect(wheel).not.toContainText(/\d{4}-\d\d-\d\d/);
+      // Every line of text stays inside its wheel's card (a date once stuck out on a phone).
+      const inside = await wheel.evaluate((el) => {
+        const r = el.getBoundingClientRect();
+        return [...el.querySelectorAll("p, span")].every((c) => {
+          const b = c.getBoundingClientRect();
+          return b.left >= r.left - 0.5 && b.right <= r.right + 0.5;
+        });
+      });
+      expect(inside, `${position} at ${width} px`).toBe(true);
     }
     // The front-left wheel sits left of and above the rear-right one: a plan, not a list.
     const fl = (await page.getByTestId("tire-front_left").boundingBox())!;
