@@ -235,7 +235,7 @@ export function computeReminders(
               severity: "watch",
               overdue: age.watchFrom < today,
               explanation: withCaution(
-                `The oldest tire of this set was made in the week of ${oldest.weekStart}. From ${age.thresholds.watchYears} years on, common practice is to have tires inspected at least once a year.`,
+                `The oldest tire of this set was made in the week of ${dayText(oldest.weekStart)}. From ${age.thresholds.watchYears} years on, common practice is to have tires inspected at least once a year.`,
               ),
             });
           }
@@ -250,7 +250,7 @@ export function computeReminders(
             explanation: withCaution(
               oldest.precision === "decade-ambiguous"
                 ? "A tire of this set has a 3-digit date code, so it was made before 2000: it should be replaced now."
-                : `The oldest tire of this set was made in the week of ${oldest.weekStart}. Common practice is to replace ${set.kind} tires ${age.thresholds.replaceYears} years after manufacture, whatever the tread.`,
+                : `The oldest tire of this set was made in the week of ${dayText(oldest.weekStart)}. Common practice is to replace ${set.kind} tires ${age.thresholds.replaceYears} years after manufacture, whatever the tread.`,
             ),
           });
         }
@@ -328,7 +328,7 @@ export function computeReminders(
           severity: date < today ? "watch" : "info",
           overdue: date < today,
           explanation: withCaution(
-            `Tires are commonly rotated every ${km(s.rotationIntervalKm)} km or as the vehicle's manual says; at about ${Math.round(rate.kmPerDay)} km a day this falls around ${date}.`,
+            `Tires are commonly rotated every ${km(s.rotationIntervalKm)} km or as the vehicle's manual says; at about ${Math.round(rate.kmPerDay)} km a day this falls around ${dayText(date)}.`,
           ),
         });
       }
@@ -358,6 +358,18 @@ export function computeReminders(
   }
   items.sort((a, b) => a.date.localeCompare(b.date) || a.id.localeCompare(b.id));
   return { ok: true, items, skipped };
+}
+
+const MONTHS = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
+
+/**
+ * A calendar date in the explanation's prose as "28 Mar 2021": day, month
+ * name, year reads one way in every English-speaking country, unlike an ISO
+ * date or a numeric one, and needs no locale data (the core runs anywhere).
+ */
+export function dayText(iso: string): string {
+  const [y, m, d] = iso.split("-").map(Number);
+  return `${d} ${MONTHS[m - 1]} ${y}`;
 }
 
 /** Thousands with commas, without depending on the runtime's locale data. */

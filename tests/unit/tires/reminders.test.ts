@@ -101,6 +101,13 @@ describe("computeReminders", () => {
     expect(items.map((i) => i.date)).toEqual([...items.map((i) => i.date)].sort());
   });
 
+  it("writes dates in the explanation as '11 Nov 2018', never as ISO dates", () => {
+    // The week's first day itself is checked against date-fns in dot.test.ts; here only how it is written.
+    const age = items.find((i) => i.kind === "age-watch" || i.kind === "age-replace");
+    expect(age?.explanation).toMatch(/made in the week of \d{1,2} [A-Z][a-z]{2} 20\d\d\./);
+    for (const i of items) expect(i.explanation).not.toMatch(/\d{4}-\d\d-\d\d/);
+  });
+
   it("ids do not change when the dates move", () => {
     const later = computeReminders(logbook(), { rotationIntervalKm: 8_000, autumnSwap: "11-01" }, { today: "2025-07-01" });
     if (!later.ok) throw new Error(later.error);
