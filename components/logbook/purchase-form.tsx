@@ -3,7 +3,6 @@
 // typed stays in the form whatever the server answers; the set, its tires,
 // the old set's fate and the fitting entry are saved in one request (one
 // transaction), then the receipt and photos upload with a progress bar.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { Paperclip, Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
@@ -22,15 +21,16 @@ import {
   POSITION_LABELS,
   SET_KIND_LABELS,
   SET_KIND_VALUES,
-  setPurchaseSchema,
   todayIso,
-  vehicleSchema,
   type PositionValue,
-} from "@/lib/validation/logbook";
+} from "@/lib/validation/labels";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { api, ApiError, keys, uploadFile } from "./api";
 import { setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 import { DotPreview, SizePreview } from "./live-decode";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.setPurchaseSchema));
 
 export type VehicleChoice = {
   id: string;
@@ -94,7 +94,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
   const initialVehicle = preselect && vehicles.some((v) => v.id === preselect) ? preselect : (vehicles[0]?.id ?? NEW);
   const depthUnit = depthUnitFor(units);
   const form = useForm<Values>({
-    resolver: zodResolver(setPurchaseSchema) as unknown as Resolver<Values>,
+    resolver: resolver as unknown as Resolver<Values>,
     mode: "onTouched",
     defaultValues: {
       vehicleId: initialVehicle,
@@ -180,6 +180,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
     if (!isNew) return vehicleId;
     if (createdVehicle) return createdVehicle.id;
     const body = { nickname: getValues("newNickname"), make: getValues("newMake"), model: getValues("newModel"), placardFrontSize: getValues("newPlacard"), odometerUnit: getValues("odometerUnit") };
+    const { vehicleSchema } = await import("@/lib/validation/logbook");
     const parsed = vehicleSchema.safeParse(body);
     if (!parsed.success) {
       const map: Record<string, Path<Values>> = { nickname: "newNickname", make: "newMake", model: "newModel", placardFrontSize: "newPlacard" };

@@ -5,7 +5,8 @@ import { decimalFromText } from "./text";
 
 const HOUR_MS = 60 * 60 * 1000;
 
-export const MAX_PASS_DAYS = 30;
+export { MAX_PASS_DAYS } from "./labels";
+import { MAX_PASS_DAYS } from "./labels";
 export const MAX_PASS_MS = MAX_PASS_DAYS * 24 * HOUR_MS;
 
 export { PASS_PRESETS, passScopes, SCOPE_LABEL, type PassScope } from "./labels";
