@@ -6,7 +6,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { Alert } from "@/components/ui/alert";
 import { FormActions } from "@/components/ui/form-actions";
 import { Button } from "@/components/ui/button";

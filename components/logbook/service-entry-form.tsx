@@ -10,7 +10,7 @@ import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { useFormat } from "@/components/format/format-provider";
 import { SERVICE_KIND_LABELS, SERVICE_KINDS, todayIso } from "@/lib/validation/labels";
 import { api, ApiError, keys } from "./api";

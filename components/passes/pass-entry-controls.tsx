@@ -7,7 +7,7 @@
 import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { useFormat } from "@/components/format/format-provider";
 import { FormLoading } from "@/components/ui/form-loading";
 import { Button } from "@/components/ui/button";
