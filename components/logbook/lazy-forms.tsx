@@ -11,11 +11,14 @@ import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { FormLoading } from "@/components/ui/form-loading";
 import type { SetView } from "@/db/queries/logbook";
+import type { TireView } from "@/db/queries/logbook-view";
+import type { SetKind } from "@/lib/tires";
+import { POSITION_LABELS } from "@/lib/validation/labels";
 
 /** The closed form's button as it looks while the form's code arrives. */
-function Opening({ label }: { label: string }) {
+function Opening({ label, className }: { label: string; className?: string }) {
   return (
-    <Button type="button" variant="secondary" size="sm" pending pendingLabel="Opening…">
+    <Button type="button" variant="secondary" size="sm" className={className} pending pendingLabel="Opening…">
       {label}
     </Button>
   );
@@ -24,6 +27,7 @@ function Opening({ label }: { label: string }) {
 const loadServiceEntryForm = () => import("./service-entry-form");
 const loadSetSettings = () => import("./set-settings");
 const loadEditEntry = () => import("./edit-entry");
+const loadTireEditor = () => import("./tire-editor");
 
 const ServiceEntryFormLazy = dynamic(() => import("./service-entry-form").then((m) => m.ServiceEntryForm), {
   ssr: false,
@@ -33,6 +37,10 @@ const SetSettingsLazy = dynamic(() => import("./set-settings").then((m) => m.Set
   ssr: false,
   loading: () => <Opening label="Change the set's name or limits" />,
 });
+const TireEditorLazy = dynamic(() => import("./tire-editor").then((m) => m.TireEditor), {
+  ssr: false,
+  loading: () => <Opening label="Opening…" className="mt-2" />,
+});
 export const EditCheck = dynamic(() => import("./edit-entry").then((m) => m.EditCheck), { ssr: false, loading: () => <FormLoading /> });
 export const EditServiceEntry = dynamic(() => import("./edit-entry").then((m) => m.EditServiceEntry), { ssr: false, loading: () => <FormLoading /> });
 
@@ -40,13 +48,31 @@ export const EditServiceEntry = dynamic(() => import("./edit-entry").then((m) =>
 export const preloadEditEntry = () => void loadEditEntry();
 
 /** A closed form's button; once pressed, the form (loaded on demand) takes its place, opened. */
-function OnDemand({ label, preload, children }: { label: string; preload: () => unknown; children: () => ReactNode }) {
+function OnDemand({ label, className, preload, children }: { label: ReactNode; className?: string; preload: () => unknown; children: () => ReactNode }) {
   const [open, setOpen] = useState(false);
   if (open) return children();
   return (
-    <Button type="button" variant="secondary" size="sm" onPointerEnter={() => void preload()} onFocus={() => void preload()} onClick={() => setOpen(true)}>
+    <Button type="button" variant="secondary" size="sm" className={className} onPointerEnter={() => void preload()} onFocus={() => void preload()} onClick={() => setOpen(true)}>
       {label}
     </Button>
+  );
+}
+
+type TireEditorProps = { tire: TireView; edit: { vehicleId: string; setId: string; kind: SetKind } };
+
+/** A tire's "Correct the DOT code or position" (or "Add the DOT code") in the tire list. */
+export function TireEditor(props: TireEditorProps) {
+  const { tire } = props;
+  const label = (
+    <>
+      {tire.dotCode ? "Correct the DOT code or position" : "Add the DOT code"}
+      <span className="sr-only"> of the {POSITION_LABELS[tire.position].toLowerCase()} tire</span>
+    </>
+  );
+  return (
+    <OnDemand label={label} className="mt-2" preload={loadTireEditor}>
+      {() => <TireEditorLazy {...props} startOpen />}
+    </OnDemand>
   );
 }
 
