@@ -1,6 +1,6 @@
 "use client";
 // The logbook's forms that open on request (a new service entry, the set's
-// settings, changing a saved check or entry) load their code when opened:
+// settings, changing a saved check or entry, a tire's editor) load their code when opened:
 // with them come zod, react-hook-form and the schemas, which the page itself
 // does not need to be shown. Until a form is opened its button is drawn here,
 // the same as the form's own closed state; the code starts loading when the
