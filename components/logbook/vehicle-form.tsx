@@ -8,7 +8,7 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field, Input, Select } from "@/components/ui/field";
-import { validateVin } from "@/lib/tires";
+import { validateVin } from "@/lib/tires/vin";
 import type { PressureUnit } from "@/lib/units";
 import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { api, ApiError, keys } from "./api";
