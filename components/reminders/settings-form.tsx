@@ -11,7 +11,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
 import type { Plan } from "@/lib/plan";
 import { JURISDICTIONS } from "@/lib/tires/depth";
-import { JURISDICTION_LABELS, REMINDER_KIND_LABELS, REMINDER_KINDS } from "@/lib/validation/labels";
+import { JURISDICTION_LABELS, REMINDER_KIND_LABELS, REMINDER_KINDS } from "@/lib/validation/reminder-labels";
 import type { reminderSettingsFormSchema } from "@/lib/validation/reminders";
 import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 

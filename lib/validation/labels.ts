@@ -1,7 +1,6 @@
 // What the browser shows of the logbook's and passes' fixed values: labels,
 // lists and the local date. No zod here: client components that only show
 // these import this module, and the validation library stays off their pages.
-import type { Jurisdiction, ReminderKind } from "@/lib/tires";
 
 /** The local calendar date; forms and handlers both use it to refuse dates in the future. */
 export function todayIso(now = new Date()): string {
@@ -59,31 +58,6 @@ export const SCOPE_LABEL: Record<PassScope, string> = {
 /** The largest upload and the file types the logbook keeps (the purchase form checks them before sending). */
 export const ATTACHMENT_MAX_BYTES = 10 * 1024 * 1024;
 export const ATTACHMENT_TYPES = ["image/jpeg", "image/png", "image/webp", "application/pdf"] as const;
-
-/** Reminder kinds and tread-limit rules as the settings form lists them (re-exported by ./reminders). */
-export const REMINDER_KINDS = ["age-watch", "age-replace", "depth-limit", "seasonal-swap", "rotation-due"] as const satisfies readonly ReminderKind[];
-
-export const REMINDER_KIND_LABELS: Record<ReminderKind, string> = {
-  "age-watch": "Tires old enough for a yearly inspection",
-  "age-replace": "Tires at their age limit",
-  "depth-limit": "Tread projected to reach its depth limit",
-  "seasonal-swap": "Seasonal change of tire sets",
-  "rotation-due": "Rotation due by distance",
-};
-
-export const JURISDICTION_LABELS: Record<Jurisdiction, string> = {
-  EU: "European Union (1.6 mm)",
-  UK: "United Kingdom (1.6 mm)",
-  US: "United States (2/32 in)",
-  DE: "Germany (1.6 mm, 4 mm advised in winter)",
-  FI: "Finland (3 mm in the winter period)",
-  NO: "Norway (3 mm in the winter period)",
-  "NO-north": "Northern Norway (3 mm, longer winter period)",
-  SE: "Sweden (3 mm in the winter period)",
-  AT: "Austria (4 mm in the winter period)",
-  practice: "Common practice (3 mm summer, 4 mm winter)",
-  custom: "My own limit",
-};
 
 /** The longest pass, in days (re-exported by ./passes). */
 export const MAX_PASS_DAYS = 30;

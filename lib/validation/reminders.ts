@@ -5,8 +5,8 @@ import { z } from "zod";
 import { decimalFromText } from "./text";
 import { JURISDICTIONS, type Jurisdiction } from "@/lib/tires";
 
-export { REMINDER_KINDS, REMINDER_KIND_LABELS, JURISDICTION_LABELS } from "./labels";
-import { REMINDER_KINDS } from "./labels";
+export { REMINDER_KINDS, REMINDER_KIND_LABELS, JURISDICTION_LABELS } from "./reminder-labels";
+import { REMINDER_KINDS } from "./reminder-labels";
 
 const monthDay = z
   .string()
