@@ -25,7 +25,8 @@ import {
   type PositionValue,
 } from "@/lib/validation/labels";
 import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
-import { api, ApiError, keys, uploadFile } from "./api";
+import { api, ApiError, keys } from "./api";
+import { uploadFile } from "./upload";
 import { setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 import { DotPreview, SizePreview } from "./live-decode";

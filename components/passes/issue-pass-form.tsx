@@ -10,7 +10,7 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { cn } from "@/lib/cn";
-import { MAX_PASS_DAYS, PASS_PRESETS, SCOPE_LABEL } from "@/lib/validation/labels";
+import { MAX_PASS_DAYS, PASS_PRESETS, SCOPE_LABEL } from "@/lib/validation/pass-labels";
 import type { issuePassSchema } from "@/lib/validation/passes";
 import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { sendJson } from "./api";

@@ -6,7 +6,7 @@ import { toast } from "@/components/ui/toast";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
-import { PASS_PRESETS } from "@/lib/validation/labels";
+import { PASS_PRESETS } from "@/lib/validation/pass-labels";
 import { sendJson } from "./api";
 
 export function PassActions({ passId, shopName }: { passId: string; shopName: string }) {
