@@ -6,7 +6,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { Paperclip, Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
-import { useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -89,6 +89,12 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
   const [savedSetId, setSavedSetId] = useState<string | null>(null);
   // Tires saved without a DOT code have no known age: the driver is told before saving, once.
   const [missingCodes, setMissingCodes] = useState<"unasked" | "asking" | "accepted">("unasked");
+  // Each time the question is asked it takes the focus (and so comes into view), once drawn:
+  // the form's check is asynchronous (its schema loads on the first one), so a frame's wait is not enough.
+  const [asked, setAsked] = useState(0);
+  useEffect(() => {
+    if (asked) document.getElementById("missing-codes")?.focus();
+  }, [asked]);
   const codesAccepted = useRef(false);
 
   const allVehicles = createdVehicle ? [...vehicles, createdVehicle] : vehicles;
@@ -233,7 +239,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
       const withoutCode = parsed.tires.filter((t) => !t.dotCode).length;
       if (withoutCode > 0 && !codesAccepted.current && !savedSetId) {
         setMissingCodes("asking");
-        requestAnimationFrame(() => document.getElementById("missing-codes")?.focus());
+        setAsked((n) => n + 1);
         return;
       }
       setPhase("saving");
