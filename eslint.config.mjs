@@ -17,6 +17,24 @@ const config = [
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
     },
   },
+  // Forms check with zod through lib/forms/lazy-zod-resolver.ts, which loads the
+  // resolver and the schema on the first check: imported directly, they put
+  // zod on the page's first load (DEVELOPERS.md, "Page weight"). Likewise toasts.
+  {
+    files: ["components/**/*.{ts,tsx}", "app/**/*.tsx"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          paths: [
+            { name: "@hookform/resolvers/zod", message: "Use lazyZodResolver from @/lib/forms/lazy-zod-resolver (loads zod on the first check)." },
+            { name: "zod", allowTypeImports: true, message: "Only types from zod in components; schemas load through lazyZodResolver." },
+            { name: "sonner", importNames: ["toast"], allowTypeImports: true, message: "Raise toasts through @/components/ui/toast (the library loads with the toast area)." },
+          ],
+        },
+      ],
+    },
+  },
 ];
 
 export default config;

@@ -1,6 +1,7 @@
 // Display units. The database keeps millimetres, kilometres and kilopascals;
 // a driver chooses metric or imperial (and a pressure unit) in the account.
-import { mmToThirtySeconds, thirtySecondsToMm } from "@/lib/tires";
+// The module itself, not the lib/tires index: the index would bring every tire rule to each page that formats a depth.
+import { mmToThirtySeconds, thirtySecondsToMm } from "@/lib/tires/depth";
 
 export type UnitSystem = "metric" | "imperial";
 export type DepthUnit = "mm" | "32nds";

@@ -1,6 +1,5 @@
 "use client";
 // Export and deletion of everything the account holds.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -10,15 +9,18 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Card, CardTitle } from "@/components/ui/card";
 import { Field, Input } from "@/components/ui/field";
-import { deleteAccountSchema } from "@/lib/validation/account";
+import type { deleteAccountSchema } from "@/lib/validation/account";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { ExportCard, ImportCard } from "./logbook-transfer";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/account").then((m) => m.deleteAccountSchema));
 
 type DeleteInput = z.infer<typeof deleteAccountSchema>;
 
 export function AccountData() {
   const router = useRouter();
   const [serverError, setServerError] = useState<string | null>(null);
-  const form = useForm<DeleteInput>({ resolver: zodResolver(deleteAccountSchema) });
+  const form = useForm<DeleteInput>({ resolver });
   return (
     <div className="grid gap-5 md:grid-cols-2">
       <ExportCard />

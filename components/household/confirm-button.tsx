@@ -1,50 +1,29 @@
 "use client";
-// A button that asks before it does something that cannot be taken back.
-import { AlertDialog } from "radix-ui";
-import { useState, type ReactNode } from "react";
-import { Button, type ButtonProps } from "@/components/ui/button";
-import { buttonVariants } from "@/components/ui/button-variants";
+// A button that asks before it does something that cannot be taken back
+// (./confirm-button-modal.tsx). Until first pressed only the button is
+// drawn; the dialog library loads then (or when the pointer or focus reaches
+// it) and the question opens, so it is not on the page's first load.
+import { useState, type ComponentType } from "react";
+import { Button } from "@/components/ui/button";
+import type { ConfirmButtonProps } from "./confirm-button-modal";
 
-export function ConfirmButton({
-  title,
-  description,
-  confirmLabel,
-  onConfirm,
-  children,
-  ...buttonProps
-}: Omit<ButtonProps, "onClick"> & { title: string; description: ReactNode; confirmLabel: string; onConfirm: () => Promise<void> | void }) {
-  const [open, setOpen] = useState(false);
-  const [busy, setBusy] = useState(false);
+type Modal = ComponentType<ConfirmButtonProps & { initiallyOpen?: boolean }>;
+const load = () => import("./confirm-button-modal").then((m) => m.ConfirmButtonModal as Modal);
+
+export function ConfirmButton(props: ConfirmButtonProps) {
+  const [Loaded, setLoaded] = useState<Modal | null>(null);
+  if (Loaded) return <Loaded {...props} initiallyOpen />;
+  const { title: _title, description: _description, confirmLabel: _confirmLabel, onConfirm: _onConfirm, children, ...buttonProps } = props;
+  const preload = () => void load().catch(() => undefined);
   return (
-    <AlertDialog.Root open={open} onOpenChange={setOpen}>
-      <AlertDialog.Trigger asChild>
-        <Button {...buttonProps} pending={busy || buttonProps.pending}>
-          {children}
-        </Button>
-      </AlertDialog.Trigger>
-      <AlertDialog.Portal>
-        <AlertDialog.Overlay className="fixed inset-0 z-40 bg-asphalt-900/40" />
-        <AlertDialog.Content className="fixed left-1/2 top-1/2 z-50 w-[min(92vw,28rem)] -translate-x-1/2 -translate-y-1/2 space-y-3 rounded-lg bg-white p-5 shadow-lg">
-          <AlertDialog.Title className="text-lg font-bold">{title}</AlertDialog.Title>
-          <AlertDialog.Description className="text-sm text-asphalt-700">{description}</AlertDialog.Description>
-          <div className="flex flex-wrap justify-end gap-2">
-            <AlertDialog.Cancel className={buttonVariants({ variant: "secondary" })}>Keep it</AlertDialog.Cancel>
-            <AlertDialog.Action
-              className={buttonVariants({ variant: "danger" })}
-              onClick={async () => {
-                setBusy(true);
-                try {
-                  await onConfirm();
-                } finally {
-                  setBusy(false);
-                }
-              }}
-            >
-              {confirmLabel}
-            </AlertDialog.Action>
-          </div>
-        </AlertDialog.Content>
-      </AlertDialog.Portal>
-    </AlertDialog.Root>
+    <Button
+      {...buttonProps}
+      aria-haspopup="dialog"
+      onPointerEnter={preload}
+      onFocus={preload}
+      onClick={() => void load().then((m) => setLoaded(() => m), () => undefined)}
+    >
+      {children}
+    </Button>
   );
 }

@@ -4,7 +4,7 @@
 import { Copy } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { useFormat } from "@/components/format/format-provider";
 import { sendJson } from "@/components/passes/api";
 import { Alert } from "@/components/ui/alert";

@@ -7,7 +7,7 @@ import { FileDown, Printer, Send, UserPlus } from "lucide-react";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { api } from "@/components/logbook/api";
 import { sendJson } from "@/components/passes/api";
 import { Alert } from "@/components/ui/alert";

@@ -2,24 +2,27 @@
 // Recording a tread check: inner / centre / outer per tire in mm or 32nds,
 // or what a coin showed (saved as an approximate depth), with pressure and
 // odometer. A depth outside 0–20 mm is refused; a lower odometer asks first.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { Alert } from "@/components/ui/alert";
 import { FormActions } from "@/components/ui/form-actions";
 import { Button } from "@/components/ui/button";
 import { Card, CardTitle } from "@/components/ui/card";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { SafetyNote } from "@/components/ui/safety-note";
-import { COIN_RESULTS, coinLabel, type CoinResult } from "@/lib/tires";
+import { COIN_RESULTS, coinLabel } from "@/lib/tires/coin";
+import type { CoinResult } from "@/lib/tires";
 import { distanceToKm, type DepthUnit, type PressureUnit } from "@/lib/units";
-import { POSITION_LABELS, todayIso, treadCheckSchema, type PositionValue } from "@/lib/validation/logbook";
+import { POSITION_LABELS, todayIso, type PositionValue } from "@/lib/validation/labels";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { api, ApiError, keys } from "./api";
 import { setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.treadCheckSchema));
 
 export type CheckSetChoice = {
   id: string;
@@ -78,7 +81,7 @@ export function CheckForm({
   const [error, setError] = useState<string | null>(null);
   const first = sets.find((s) => s.id === preselect) ?? sets.find((s) => s.state === "mounted") ?? sets[0];
   const form = useForm<Values>({
-    resolver: zodResolver(treadCheckSchema) as unknown as Resolver<Values>,
+    resolver: resolver as unknown as Resolver<Values>,
     mode: "onTouched",
     defaultValues: edit?.values ?? {
       setId: first?.id ?? "",

@@ -2,7 +2,7 @@
 // Deleting a vehicle and everything logged for it, after a confirmation that says what goes.
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { useFormat } from "@/components/format/format-provider";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";

@@ -4,7 +4,7 @@
 // what the forms take, in the reader's units. The driver's page and the
 // technician's view under a pass both use it; only the address differs.
 import type { CheckView, ServiceView, SetView } from "@/db/queries/logbook";
-import { COIN_RESULTS, coinDepth } from "@/lib/tires";
+import { COIN_RESULTS, coinDepth } from "@/lib/tires/coin";
 import { kmToDistance, kpaToPressure, mmToDepth, type DepthUnit, type PressureUnit } from "@/lib/units";
 import { CheckForm, type CheckFormValues, type CheckSetChoice } from "./check-form";
 import { ServiceEntryForm, type ServiceFormValues } from "./service-entry-form";

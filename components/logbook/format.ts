@@ -1,6 +1,6 @@
 // Small display helpers shared by the logbook's pages; dates, numbers and
 // units are formatted by lib/format in the viewer's locale and time zone.
-import { SET_KIND_LABELS } from "@/lib/validation/logbook";
+import { SET_KIND_LABELS } from "@/lib/validation/labels";
 
 export function setTitle(s: { label: string | null; kind: keyof typeof SET_KIND_LABELS; size?: string }): string {
   return s.label ?? `${SET_KIND_LABELS[s.kind]} set${s.size ? ` ${s.size}` : ""}`;

@@ -82,12 +82,15 @@ export function HistoryTable({
   distanceUnit,
   onDelete,
   onEdit,
+  onEditIntent,
 }: {
   rows: HistoryRow[];
   distanceUnit: DistanceUnit;
   onDelete?: (row: HistoryRow) => Promise<void>;
   /** Opens the row's edit form (kept stable by the caller, like onDelete). */
   onEdit?: (row: HistoryRow) => void;
+  /** The pointer or focus reached a row's edit button: a chance to start loading the form's code. */
+  onEditIntent?: () => void;
 }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: "date", desc: true }]);
   const [typeFilter, setTypeFilter] = useState("");
@@ -120,7 +123,7 @@ export function HistoryTable({
                 return (
                   <div className="flex flex-col md:flex-row">
                   {onEdit ? (
-                    <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Change: ${row.type}, ${f.date(row.date)}`} onClick={() => onEdit(row)}>
+                    <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Change: ${row.type}, ${f.date(row.date)}`} onPointerEnter={onEditIntent} onFocus={onEditIntent} onClick={() => onEdit(row)}>
                       <Pencil aria-hidden className="size-4" />
                     </button>
                   ) : null}
@@ -148,7 +151,7 @@ export function HistoryTable({
           ]
         : []),
     ],
-    [distanceUnit, f, onDelete, onEdit],
+    [distanceUnit, f, onDelete, onEdit, onEditIntent],
   );
   // eslint-disable-next-line react-hooks/incompatible-library -- the inputs are stable by hand (see above); the compiler is not enabled
   const table = useReactTable({

@@ -3,7 +3,11 @@
 // Everything here comes from lib/tires; nothing is judged in the component.
 import { AlertTriangle, CheckCircle2, XCircle } from "lucide-react";
 import { ConditionBadge } from "@/components/ui/condition-badge";
-import { ageCondition, checkFit, decodeDotCode, loadIndexKg, overallDiameter, parseTireSize, speedSymbolKmh, type FitStatus, type SetKind } from "@/lib/tires";
+import { ageCondition } from "@/lib/tires/age";
+import { checkFit, overallDiameter, parseTireSize } from "@/lib/tires/size";
+import { decodeDotCode } from "@/lib/tires/dot";
+import { loadIndexKg, speedSymbolKmh } from "@/lib/tires/load-index";
+import type { FitStatus, SetKind } from "@/lib/tires";
 import { todayIso } from "@/lib/validation/labels";
 import { useFormat } from "@/components/format/format-provider";
 

@@ -3,11 +3,10 @@
 // typed stays in the form whatever the server answers; the set, its tires,
 // the old set's fate and the fitting entry are saved in one request (one
 // transaction), then the receipt and photos upload with a progress bar.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { Paperclip, Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
-import { useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -22,15 +21,17 @@ import {
   POSITION_LABELS,
   SET_KIND_LABELS,
   SET_KIND_VALUES,
-  setPurchaseSchema,
   todayIso,
-  vehicleSchema,
   type PositionValue,
-} from "@/lib/validation/logbook";
-import { api, ApiError, keys, uploadFile } from "./api";
+} from "@/lib/validation/labels";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
+import { api, ApiError, keys } from "./api";
+import { uploadFile } from "./upload";
 import { setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 import { DotPreview, SizePreview } from "./live-decode";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.setPurchaseSchema));
 
 export type VehicleChoice = {
   id: string;
@@ -88,13 +89,19 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
   const [savedSetId, setSavedSetId] = useState<string | null>(null);
   // Tires saved without a DOT code have no known age: the driver is told before saving, once.
   const [missingCodes, setMissingCodes] = useState<"unasked" | "asking" | "accepted">("unasked");
+  // Each time the question is asked it takes the focus (and so comes into view), once drawn:
+  // the form's check is asynchronous (its schema loads on the first one), so a frame's wait is not enough.
+  const [asked, setAsked] = useState(0);
+  useEffect(() => {
+    if (asked) document.getElementById("missing-codes")?.focus();
+  }, [asked]);
   const codesAccepted = useRef(false);
 
   const allVehicles = createdVehicle ? [...vehicles, createdVehicle] : vehicles;
   const initialVehicle = preselect && vehicles.some((v) => v.id === preselect) ? preselect : (vehicles[0]?.id ?? NEW);
   const depthUnit = depthUnitFor(units);
   const form = useForm<Values>({
-    resolver: zodResolver(setPurchaseSchema) as unknown as Resolver<Values>,
+    resolver: resolver as unknown as Resolver<Values>,
     mode: "onTouched",
     defaultValues: {
       vehicleId: initialVehicle,
@@ -180,6 +187,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
     if (!isNew) return vehicleId;
     if (createdVehicle) return createdVehicle.id;
     const body = { nickname: getValues("newNickname"), make: getValues("newMake"), model: getValues("newModel"), placardFrontSize: getValues("newPlacard"), odometerUnit: getValues("odometerUnit") };
+    const { vehicleSchema } = await import("@/lib/validation/logbook");
     const parsed = vehicleSchema.safeParse(body);
     if (!parsed.success) {
       const map: Record<string, Path<Values>> = { nickname: "newNickname", make: "newMake", model: "newModel", placardFrontSize: "newPlacard" };
@@ -231,7 +239,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
       const withoutCode = parsed.tires.filter((t) => !t.dotCode).length;
       if (withoutCode > 0 && !codesAccepted.current && !savedSetId) {
         setMissingCodes("asking");
-        requestAnimationFrame(() => document.getElementById("missing-codes")?.focus());
+        setAsked((n) => n + 1);
         return;
       }
       setPhase("saving");

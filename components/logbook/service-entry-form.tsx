@@ -3,19 +3,21 @@
 // vehicle page, or a saved one changed (by the driver, or by a shop under the
 // pass that recorded it) through `edit`.
 import { FormActions } from "@/components/ui/form-actions";
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm, type Path, type Resolver } from "react-hook-form";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { useFormat } from "@/components/format/format-provider";
-import { SERVICE_KIND_LABELS, SERVICE_KINDS, serviceEntrySchema, serviceEntryUpdateSchema, todayIso } from "@/lib/validation/logbook";
+import { SERVICE_KIND_LABELS, SERVICE_KINDS, todayIso } from "@/lib/validation/labels";
 import { api, ApiError, keys } from "./api";
 
 export type ServiceFormValues = Values;
+const newResolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.serviceEntrySchema));
+const updateResolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.serviceEntryUpdateSchema));
 type Values = { kind: (typeof SERVICE_KINDS)[number]; setId: string; performedOn: string; odometer: string; odometerUnit: "km" | "mi"; confirmLowerOdometer: boolean; cost: string; notes: string };
 
 export function ServiceEntryForm({
@@ -23,18 +25,21 @@ export function ServiceEntryForm({
   sets,
   odometerUnit,
   edit,
+  startOpen = false,
 }: {
   vehicleId: string;
   sets: { id: string; name: string }[];
   odometerUnit: "km" | "mi";
   /** Changing a saved entry: its values, the address it is PATCHed to, and what happens after. */
   edit?: { url: string; values: Values; onDone: () => void; onCancel: () => void };
+  /** Shown opened (its button was pressed before its code loaded: lazy-forms.tsx). */
+  startOpen?: boolean;
 }) {
   const queryClient = useQueryClient();
   const f = useFormat();
-  const [open, setOpen] = useState(!!edit);
+  const [open, setOpen] = useState(!!edit || startOpen);
   const form = useForm<Values>({
-    resolver: zodResolver(edit ? serviceEntryUpdateSchema : serviceEntrySchema) as unknown as Resolver<Values>,
+    resolver: (edit ? updateResolver : newResolver) as unknown as Resolver<Values>,
     defaultValues: edit?.values ?? { kind: "rotation", setId: sets[0]?.id ?? "", performedOn: todayIso(), odometer: "", odometerUnit, confirmLowerOdometer: false, cost: "", notes: "" },
   });
   const save = useMutation({

@@ -19,8 +19,8 @@ import { POSITION_LABELS, SET_KIND_LABELS } from "@/lib/validation/labels";
 import { api, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
-import { SetSettings } from "./set-settings";
-import { EditCheck } from "./edit-entry";
+// The forms that open on request load their code (and zod, react-hook-form) when opened.
+import { EditCheck, SetSettings, preloadEditEntry } from "./lazy-forms";
 import { TireList } from "./tire-list";
 // The chart library is most of this page's JavaScript: it loads after the
 // page is shown, into a box of the chart's own height (no layout shift).
@@ -164,6 +164,8 @@ export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: 
                             size="sm"
                             variant="ghost"
                             className="ml-1"
+                            onPointerEnter={preloadEditEntry}
+                            onFocus={preloadEditEntry}
                             onClick={() => {
                               setEditingId(c.id);
                               requestAnimationFrame(() => {

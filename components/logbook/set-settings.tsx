@@ -2,7 +2,6 @@
 // The set's own name, storage place and limits (overriding the defaults of
 // the computation core), or retiring it.
 import { FormActions } from "@/components/ui/form-actions";
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm, type Path, type Resolver } from "react-hook-form";
@@ -10,18 +9,21 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import type { SetView } from "@/db/queries/logbook";
-import { setUpdateSchema } from "@/lib/validation/logbook";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { api, ApiError, keys } from "./api";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.setUpdateSchema));
 
 type Values = { label: string; seller: string; storageLocation: string; depthLimitMm: string; ageWatchYears: string; ageReplaceYears: string; retire: boolean };
 
 const str = (v: number | string | null | undefined) => (v == null ? "" : String(v));
 
-export function SetSettings({ set, vehicleId }: { set: SetView; vehicleId: string }) {
+/** `startOpen`: shown opened (its button was pressed before its code loaded: lazy-forms.tsx). */
+export function SetSettings({ set, vehicleId, startOpen = false }: { set: SetView; vehicleId: string; startOpen?: boolean }) {
   const queryClient = useQueryClient();
-  const [open, setOpen] = useState(false);
+  const [open, setOpen] = useState(startOpen);
   const form = useForm<Values>({
-    resolver: zodResolver(setUpdateSchema) as unknown as Resolver<Values>,
+    resolver: resolver as unknown as Resolver<Values>,
     defaultValues: {
       label: str(set.label),
       seller: str(set.seller),

@@ -1,17 +1,19 @@
 "use client";
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, type Resolver } from "react-hook-form";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import type { ActionResult } from "@/lib/actions";
-import { unitsSchema, type UnitsInput } from "@/lib/validation/logbook";
+import type { UnitsInput } from "@/lib/validation/logbook";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.unitsSchema));
 
 export function UnitsForm({ initial, save }: { initial: UnitsInput; save: (v: UnitsInput) => Promise<ActionResult<UnitsInput>> }) {
   const queryClient = useQueryClient();
   const [result, setResult] = useState<ActionResult<UnitsInput> | null>(null);
-  const form = useForm<UnitsInput>({ resolver: zodResolver(unitsSchema), defaultValues: initial });
+  const form = useForm<UnitsInput>({ resolver: resolver as unknown as Resolver<UnitsInput>, defaultValues: initial });
   const { register, formState } = form;
   return (
     <form

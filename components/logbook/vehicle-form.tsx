@@ -1,6 +1,5 @@
 "use client";
 // Adding (or changing) a vehicle: the same zod schema as the API.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -9,11 +8,13 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field, Input, Select } from "@/components/ui/field";
-import { validateVin } from "@/lib/tires";
+import { validateVin } from "@/lib/tires/vin";
 import type { PressureUnit } from "@/lib/units";
-import { vehicleSchema } from "@/lib/validation/logbook";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { api, ApiError, keys } from "./api";
 import { SizePreview } from "./live-decode";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.vehicleSchema));
 
 type Values = {
   nickname: string;
@@ -48,7 +49,7 @@ export function VehicleForm({
   const queryClient = useQueryClient();
   const [error, setError] = useState<string | null>(null);
   const form = useForm<Values>({
-    resolver: zodResolver(vehicleSchema) as unknown as Resolver<Values>,
+    resolver: resolver as unknown as Resolver<Values>,
     mode: "onTouched",
     defaultValues: { nickname: "", make: "", model: "", year: "", vin: "", plate: "", placardFrontSize: "", placardRearSize: "", placardFrontPressure: "", placardRearPressure: "", pressureUnit, odometerUnit, ...existing?.values },
   });

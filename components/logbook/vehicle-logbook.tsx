@@ -8,7 +8,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
 import { useCallback, useMemo, useRef, useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -26,8 +26,8 @@ import { api, ApiError, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 import { HistoryTable, historyRows, type HistoryRow } from "./history-table";
-import { EditCheck, EditServiceEntry } from "./edit-entry";
-import { ServiceEntryForm } from "./service-entry-form";
+// The forms that open on request load their code (and zod, react-hook-form) when opened.
+import { EditCheck, EditServiceEntry, NewServiceEntry, preloadEditEntry } from "./lazy-forms";
 import { TireList } from "./tire-list";
 import { useOlderHistory } from "./use-older-history";
 
@@ -147,7 +147,7 @@ export function VehicleLogbookView({
           History
         </h2>
         {canManage ? (
-          <ServiceEntryForm vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
+          <NewServiceEntry vehicleId={id} sets={book.sets.filter((s) => s.state !== "retired").map((s) => ({ id: s.id, name: setTitle(s) }))} odometerUnit={distanceUnit} />
         ) : null}
         {editing && (editingCheck || editingEntry) ? (
           <div ref={editRef} tabIndex={-1} className="scroll-mt-24 outline-none" data-testid="edit-entry">
@@ -160,7 +160,7 @@ export function VehicleLogbookView({
             </Card>
           </div>
         ) : null}
-        <HistoryTable rows={rows} distanceUnit={distanceUnit} onDelete={canManage ? deleteEntry : undefined} onEdit={canManage ? editEntry : undefined} />
+        <HistoryTable rows={rows} distanceUnit={distanceUnit} onDelete={canManage ? deleteEntry : undefined} onEdit={canManage ? editEntry : undefined} onEditIntent={canManage ? preloadEditEntry : undefined} />
         {canManage ? <OlderHistory book={book} /> : null}
       </section>
 

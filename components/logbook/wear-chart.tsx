@@ -9,7 +9,7 @@ import { CartesianGrid, Legend, Line, LineChart, ReferenceArea, ResponsiveContai
 import type { TireView } from "@/db/queries/logbook-view";
 import { kmToDistance, mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/labels";
-import { DEPTH_PLAN_MARGIN_MM, DEPTH_WATCH_MARGIN_MM } from "@/lib/tires";
+import { DEPTH_PLAN_MARGIN_MM, DEPTH_WATCH_MARGIN_MM } from "@/lib/tires/depth";
 import { asphalt, condition, limitZone } from "@/lib/visual/tokens";
 import { useFormat } from "@/components/format/format-provider";
 

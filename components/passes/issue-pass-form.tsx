@@ -1,7 +1,6 @@
 "use client";
 // The driver gives a shop a pass: which vehicles, which shop (from the
 // directory), what the shop may do, for how long, and a note.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { Search } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useEffect, useId, useState } from "react";
@@ -11,8 +10,12 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { cn } from "@/lib/cn";
-import { issuePassSchema, MAX_PASS_DAYS, PASS_PRESETS, SCOPE_LABEL } from "@/lib/validation/passes";
+import { MAX_PASS_DAYS, PASS_PRESETS, SCOPE_LABEL } from "@/lib/validation/pass-labels";
+import type { issuePassSchema } from "@/lib/validation/passes";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { sendJson } from "./api";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/passes").then((m) => m.issuePassSchema));
 
 type Vehicle = { id: string; nickname: string; make: string; model: string; year: number | null };
 type Shop = { id: string; name: string; town: string; address: string | null };
@@ -25,7 +28,7 @@ export function IssuePassForm({ vehicles }: { vehicles: Vehicle[] }) {
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
   const form = useForm<FormIn, unknown, FormOut>({
-    resolver: zodResolver(issuePassSchema),
+    resolver,
     defaultValues: { vehicleIds: vehicles.length === 1 ? [vehicles[0].id] : [], scope: "view_add", duration: "8h", shopId: "", note: "" },
   });
   const errors = form.formState.errors;

@@ -2,11 +2,11 @@
 // Extend or withdraw one of the driver's passes.
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
-import { PASS_PRESETS } from "@/lib/validation/labels";
+import { PASS_PRESETS } from "@/lib/validation/pass-labels";
 import { sendJson } from "./api";
 
 export function PassActions({ passId, shopName }: { passId: string; shopName: string }) {

@@ -2,19 +2,24 @@
 // The technician's "Change" and "Delete" for a check or service entry the
 // shop recorded under this pass. The server checks again that the pass is
 // live, may add, and recorded the entry; each change lands in the driver's
-// access log. The forms are the driver's own (components/logbook/edit-entry).
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+// access log. The forms are the driver's own (components/logbook/edit-entry),
+// loaded when "Change" is pressed (./pass-entry-edit).
+import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { useFormat } from "@/components/format/format-provider";
-import { EditCheck, EditServiceEntry } from "@/components/logbook/edit-entry";
+import { FormLoading } from "@/components/ui/form-loading";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import type { CheckView, ServiceView, SetView } from "@/db/queries/logbook";
 import type { DepthUnit, PressureUnit } from "@/lib/units";
-import { SERVICE_KIND_LABELS } from "@/lib/validation/logbook";
+import { SERVICE_KIND_LABELS } from "@/lib/validation/labels";
 import { sendJson } from "./api";
+
+const loadEdit = () => import("./pass-entry-edit");
+const PassEntryEdit = dynamic(() => import("./pass-entry-edit").then((m) => m.PassEntryEdit), { ssr: false, loading: () => <FormLoading /> });
+const preload = () => void loadEdit();
 
 type Props = {
   passId: string;
@@ -24,16 +29,7 @@ type Props = {
   pressureUnit: PressureUnit;
 } & ({ check: CheckView; entry?: never } | { entry: ServiceView; check?: never });
 
-export function PassEntryControls(props: Props) {
-  const [client] = useState(() => new QueryClient());
-  return (
-    <QueryClientProvider client={client}>
-      <Controls {...props} />
-    </QueryClientProvider>
-  );
-}
-
-function Controls({ passId, vehicle, sets, depthUnit, pressureUnit, check, entry }: Props) {
+export function PassEntryControls({ passId, vehicle, sets, depthUnit, pressureUnit, check, entry }: Props) {
   const f = useFormat();
   const router = useRouter();
   const [editing, setEditing] = useState(false);
@@ -53,6 +49,8 @@ function Controls({ passId, vehicle, sets, depthUnit, pressureUnit, check, entry
           size="sm"
           variant="secondary"
           aria-expanded={editing}
+          onPointerEnter={preload}
+          onFocus={preload}
           onClick={() => {
             setEditing((x) => !x);
             requestAnimationFrame(() => boxRef.current?.scrollIntoView({ block: "start", behavior: "smooth" }));
@@ -87,9 +85,9 @@ function Controls({ passId, vehicle, sets, depthUnit, pressureUnit, check, entry
       {editing ? (
         <div ref={boxRef} className="scroll-mt-24 rounded-lg border border-groove-300 bg-white p-3" data-testid="pass-edit">
           {check ? (
-            <EditCheck check={check} url={url} vehicle={vehicle} sets={sets} depthUnit={depthUnit} pressureUnit={pressureUnit} onDone={done} />
+            <PassEntryEdit check={check} url={url} vehicle={vehicle} sets={sets} depthUnit={depthUnit} pressureUnit={pressureUnit} onDone={done} />
           ) : (
-            <EditServiceEntry entry={entry!} url={url} vehicle={vehicle} sets={sets} depthUnit={depthUnit} pressureUnit={pressureUnit} onDone={done} />
+            <PassEntryEdit entry={entry!} url={url} vehicle={vehicle} sets={sets} depthUnit={depthUnit} pressureUnit={pressureUnit} onDone={done} />
           )}
         </div>
       ) : null}

@@ -7,7 +7,8 @@ import { useId, useMemo, useState } from "react";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
-import { decodeDotCode, tireAge } from "@/lib/tires";
+import { decodeDotCode } from "@/lib/tires/dot";
+import { tireAge } from "@/lib/tires/age";
 import { POSITION_LABELS, SET_KIND_LABELS, SET_KIND_VALUES, type PositionValue } from "@/lib/validation/labels";
 import { sendJson } from "./api";
 

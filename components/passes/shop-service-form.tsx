@@ -4,7 +4,7 @@
 // ended the server refuses and the form says so, keeping what was typed.
 import { useRouter } from "next/navigation";
 import { useId, useRef, useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";

@@ -10,7 +10,7 @@ import type { TireView } from "@/db/queries/logbook-view";
 import { cn } from "@/lib/cn";
 import type { Formatter } from "@/lib/format";
 import type { DepthUnit } from "@/lib/units";
-import { POSITION_LABELS } from "@/lib/validation/logbook";
+import { POSITION_LABELS } from "@/lib/validation/labels";
 
 type Side = "left" | "right";
 const WHEELS = [

@@ -6,7 +6,8 @@ import Link from "next/link";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { useFormat } from "@/components/format/format-provider";
 import { logbookPath, whatToDo } from "@/lib/reminders/describe";
-import { CAUTION, type ReminderItem } from "@/lib/tires";
+import { CAUTION } from "@/lib/tires/result";
+import type { ReminderItem } from "@/lib/tires";
 
 function SeverityBadge({ item }: { item: ReminderItem }) {
   if (item.severity === "info") {

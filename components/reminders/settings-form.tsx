@@ -1,7 +1,6 @@
 "use client";
 // Reminder settings: the same zod schema checks the form here and the
 // server action there. Plus-only choices stay visible but switched off on Free.
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
@@ -11,8 +10,12 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
 import type { Plan } from "@/lib/plan";
-import { JURISDICTIONS } from "@/lib/tires";
-import { JURISDICTION_LABELS, REMINDER_KIND_LABELS, REMINDER_KINDS, reminderSettingsFormSchema } from "@/lib/validation/reminders";
+import { JURISDICTIONS } from "@/lib/tires/depth";
+import { JURISDICTION_LABELS, REMINDER_KIND_LABELS, REMINDER_KINDS } from "@/lib/validation/reminder-labels";
+import type { reminderSettingsFormSchema } from "@/lib/validation/reminders";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/reminders").then((m) => m.reminderSettingsFormSchema));
 
 type In = z.input<typeof reminderSettingsFormSchema>;
 type Out = z.output<typeof reminderSettingsFormSchema>;
@@ -24,7 +27,7 @@ export function SettingsForm({ defaults, plan, timeZones }: { defaults: Out; pla
   const [pending, start] = useTransition();
   const [result, setResult] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const form = useForm<In, unknown, Out>({
-    resolver: zodResolver(reminderSettingsFormSchema),
+    resolver,
     defaultValues: {
       ...defaults,
       kinds: plus ? defaults.kinds : defaults.kinds.filter((k) => !PLUS_KINDS.has(k)),

@@ -1,7 +1,6 @@
 "use client";
 // The shop's public profile: name, town and contact. The same form opens a
 // shop and, for its owner, edits it.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, type Path } from "react-hook-form";
@@ -10,7 +9,10 @@ import { sendJson } from "@/components/passes/api";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
-import { shopProfileSchema } from "@/lib/validation/shops";
+import type { shopProfileSchema } from "@/lib/validation/shops";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
+
+const resolver = lazyZodResolver(() => import("@/lib/validation/shops").then((m) => m.shopProfileSchema));
 
 type In = z.input<typeof shopProfileSchema>;
 type Out = z.output<typeof shopProfileSchema>;
@@ -43,7 +45,7 @@ function ProfileFields({ form }: { form: ReturnType<typeof useForm<In, unknown, 
 }
 
 function useProfileForm(defaults: Partial<In>) {
-  return useForm<In, unknown, Out>({ resolver: zodResolver(shopProfileSchema), defaultValues: { name: "", town: "", ...defaults } });
+  return useForm<In, unknown, Out>({ resolver, defaultValues: { name: "", town: "", ...defaults } });
 }
 
 export function CreateShopForm() {

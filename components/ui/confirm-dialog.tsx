@@ -1,81 +1,31 @@
 "use client";
-// The one confirmation before anything is removed or broken: a modal alert
-// dialog (focus kept inside, Escape cancels, the safe choice focused first)
-// that says what happens and names the thing.
-import { AlertDialog } from "radix-ui";
-import { useState, type ReactNode } from "react";
-import { Button } from "./button";
+// The one confirmation before anything is removed or broken
+// (./confirm-dialog-modal.tsx: a modal alert dialog, focus kept inside,
+// Escape cancels, the safe choice focused first). Until its trigger is first
+// pressed only the trigger is drawn: the dialog library loads then (or as the
+// pointer or focus reaches the trigger) and the dialog opens, so it is not on
+// the first load of every page with a delete button.
+import { cloneElement, isValidElement, useState, type ComponentType, type MouseEvent, type ReactElement } from "react";
+import type { ConfirmDialogProps } from "./confirm-dialog-modal";
 
-export function ConfirmDialog({
-  trigger,
-  title,
-  description,
-  confirmLabel,
-  cancelLabel = "Keep it",
-  onConfirm,
-  tone = "danger",
-}: {
-  /** The control that opens the dialog (a Button). */
-  trigger: ReactNode;
-  title: string;
-  description: ReactNode;
-  confirmLabel: string;
-  cancelLabel?: string;
-  /** Runs on confirm; the dialog stays open with a pending button until it settles. */
-  onConfirm: () => Promise<unknown> | void;
-  tone?: "danger" | "primary";
-}) {
-  const [open, setOpen] = useState(false);
-  const [pending, setPending] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  return (
-    <AlertDialog.Root
-      open={open}
-      onOpenChange={(o) => {
-        if (!pending) setOpen(o);
-        if (o) setError(null);
-      }}
-    >
-      <AlertDialog.Trigger asChild>{trigger}</AlertDialog.Trigger>
-      <AlertDialog.Portal>
-        <AlertDialog.Overlay className="fixed inset-0 z-40 bg-asphalt-950/50" />
-        <AlertDialog.Content className="fixed left-1/2 top-1/2 z-50 w-[calc(100vw-2rem)] max-w-md -translate-x-1/2 -translate-y-1/2 space-y-4 rounded-lg bg-white p-5 shadow-xl">
-          <AlertDialog.Title className="text-lg font-bold text-asphalt-950">{title}</AlertDialog.Title>
-          <AlertDialog.Description asChild>
-            <div className="text-asphalt-800">{description}</div>
-          </AlertDialog.Description>
-          {error ? (
-            <p role="alert" className="text-sm font-semibold text-condition-replace">
-              {error}
-            </p>
-          ) : null}
-          <div className="flex flex-wrap justify-end gap-2">
-            <AlertDialog.Cancel asChild>
-              <Button type="button" variant="secondary" disabled={pending}>
-                {cancelLabel}
-              </Button>
-            </AlertDialog.Cancel>
-            <Button
-              type="button"
-              variant={tone}
-              pending={pending}
-              onClick={async () => {
-                setPending(true);
-                try {
-                  await onConfirm();
-                  setOpen(false);
-                } catch (e) {
-                  setError(e instanceof Error ? e.message : "That did not work. Try again.");
-                } finally {
-                  setPending(false);
-                }
-              }}
-            >
-              {confirmLabel}
-            </Button>
-          </div>
-        </AlertDialog.Content>
-      </AlertDialog.Portal>
-    </AlertDialog.Root>
-  );
+type Modal = ComponentType<ConfirmDialogProps & { initiallyOpen?: boolean }>;
+const load = () => import("./confirm-dialog-modal").then((m) => m.ConfirmDialogModal as Modal);
+
+export function ConfirmDialog(props: ConfirmDialogProps) {
+  const [Loaded, setLoaded] = useState<Modal | null>(null);
+  if (Loaded) return <Loaded {...props} initiallyOpen />;
+  const trigger = props.trigger;
+  if (!isValidElement(trigger)) return <>{trigger}</>;
+  const own = (trigger as ReactElement<{ onClick?: (e: MouseEvent<HTMLElement>) => void }>).props;
+  const preload = () => void load().catch(() => undefined);
+  return cloneElement(trigger as ReactElement<Record<string, unknown>>, {
+    "aria-haspopup": "dialog",
+    onPointerEnter: preload,
+    onFocus: preload,
+    onClick: (e: MouseEvent<HTMLElement>) => {
+      own.onClick?.(e);
+      if (e.defaultPrevented) return;
+      void load().then((m) => setLoaded(() => m), () => undefined);
+    },
+  });
 }

@@ -6,7 +6,7 @@ import { ConditionPatch, conditionLabel } from "@/components/ui/condition-badge"
 import { TireTreadProfile } from "@/components/visual/tread-profile";
 import type { TireView } from "@/db/queries/logbook-view";
 import type { DepthUnit } from "@/lib/units";
-import { POSITION_LABELS } from "@/lib/validation/logbook";
+import { POSITION_LABELS } from "@/lib/validation/labels";
 
 type GlanceTire = Pick<TireView, "id" | "position" | "newDepthMm" | "latest" | "condition">;
 const ORDER = ["front_left", "front_right", "rear_left", "rear_right"] as const;

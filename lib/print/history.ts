@@ -8,7 +8,7 @@ import { setTitle } from "@/components/logbook/format";
 import type { VehicleLogbook } from "@/db/queries/logbook";
 import { DEFAULT_PREFS, formatter, type Formatter } from "@/lib/format";
 import { depthUnitFor } from "@/lib/units";
-import { POSITION_LABELS, SERVICE_KIND_LABELS, SET_KIND_LABELS } from "@/lib/validation/logbook";
+import { POSITION_LABELS, SERVICE_KIND_LABELS, SET_KIND_LABELS } from "@/lib/validation/labels";
 
 export type PrintableHistory = {
   title: string;

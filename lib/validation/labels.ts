@@ -1,6 +1,8 @@
 // What the browser shows of the logbook's and passes' fixed values: labels,
 // lists and the local date. No zod here: client components that only show
 // these import this module, and the validation library stays off their pages.
+// (A pass's lengths and scopes are in ./pass-labels, the reminder lists in
+// ./reminder-labels: each page carries only the lists it shows.)
 
 /** The local calendar date; forms and handlers both use it to refuse dates in the future. */
 export function todayIso(now = new Date()): string {
@@ -38,19 +40,6 @@ export const SERVICE_KIND_LABELS: Record<(typeof SERVICE_KINDS)[number], string>
 };
 
 
-/** Preset lengths offered first; a custom length may go up to 30 days. */
-export const PASS_PRESETS = [
-  { value: "4h", label: "4 hours", hours: 4 },
-  { value: "8h", label: "A working day (8 hours)", hours: 8 },
-  { value: "24h", label: "24 hours", hours: 24 },
-  { value: "3d", label: "3 days", hours: 72 },
-  { value: "7d", label: "7 days", hours: 168 },
-] as const;
-
-export const passScopes = ["view", "view_add"] as const;
-export type PassScope = (typeof passScopes)[number];
-
-export const SCOPE_LABEL: Record<PassScope, string> = {
-  view: "Read only",
-  view_add: "Read and add entries",
-};
+/** The largest upload and the file types the logbook keeps (the purchase form checks them before sending). */
+export const ATTACHMENT_MAX_BYTES = 10 * 1024 * 1024;
+export const ATTACHMENT_TYPES = ["image/jpeg", "image/png", "image/webp", "application/pdf"] as const;

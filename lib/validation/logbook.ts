@@ -326,8 +326,7 @@ export type ServiceEntryUpdateInput = z.output<typeof serviceEntryUpdateSchema>;
 
 // ---------------------------------------------------------------- attachments
 
-export const ATTACHMENT_MAX_BYTES = 10 * 1024 * 1024;
-export const ATTACHMENT_TYPES = ["image/jpeg", "image/png", "image/webp", "application/pdf"] as const;
+export { ATTACHMENT_MAX_BYTES, ATTACHMENT_TYPES } from "./labels";
 export const attachmentMetaSchema = z.object({
   kind: z.enum(["receipt", "photo", "document"]).default("receipt"),
   setId: z.preprocess(blank, id.optional()),

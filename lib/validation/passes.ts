@@ -5,11 +5,12 @@ import { decimalFromText } from "./text";
 
 const HOUR_MS = 60 * 60 * 1000;
 
-export const MAX_PASS_DAYS = 30;
+export { MAX_PASS_DAYS } from "./pass-labels";
+import { MAX_PASS_DAYS } from "./pass-labels";
 export const MAX_PASS_MS = MAX_PASS_DAYS * 24 * HOUR_MS;
 
-export { PASS_PRESETS, passScopes, SCOPE_LABEL, type PassScope } from "./labels";
-import { PASS_PRESETS, passScopes } from "./labels";
+export { PASS_PRESETS, passScopes, SCOPE_LABEL, type PassScope } from "./pass-labels";
+import { PASS_PRESETS, passScopes } from "./pass-labels";
 
 const presetValues = PASS_PRESETS.map((p) => p.value) as unknown as ["4h", "8h", "24h", "3d", "7d"];
 

@@ -1,6 +1,5 @@
 "use client";
 import { linkClass } from "@/components/logbook/format";
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
@@ -11,7 +10,14 @@ import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { safeNextPath } from "@/lib/safe-next";
-import { forgotPasswordSchema, resetPasswordSchema, signInSchema, signUpSchema } from "@/lib/validation/auth";
+import type { forgotPasswordSchema, resetPasswordSchema, signInSchema, signUpSchema } from "@/lib/validation/auth";
+import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
+
+// The schemas (and zod) load on a form's first check.
+const signInResolver = lazyZodResolver(() => import("@/lib/validation/auth").then((m) => m.signInSchema));
+const signUpResolver = lazyZodResolver(() => import("@/lib/validation/auth").then((m) => m.signUpSchema));
+const forgotResolver = lazyZodResolver(() => import("@/lib/validation/auth").then((m) => m.forgotPasswordSchema));
+const resetResolver = lazyZodResolver(() => import("@/lib/validation/auth").then((m) => m.resetPasswordSchema));
 
 type FieldSpec<T> = { name: Path<T & FieldValues>; label: string; type: string; autoComplete: string; hint?: string };
 
@@ -84,7 +90,7 @@ export function SignInForm() {
   const badLink = params.get("verified") === "1" && !!params.get("error");
   const [error, setError] = useState<string | null>(null);
   const [unverified, setUnverified] = useState<string | null>(null);
-  const form = useForm<z.infer<typeof signInSchema>>({ resolver: zodResolver(signInSchema) });
+  const form = useForm<z.infer<typeof signInSchema>>({ resolver: signInResolver });
   return (
     <form
       noValidate
@@ -141,7 +147,7 @@ export function SignUpForm() {
   const back = next === "/start" ? null : next;
   const [error, setError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const form = useForm<z.infer<typeof signUpSchema>>({ resolver: zodResolver(signUpSchema) });
+  const form = useForm<z.infer<typeof signUpSchema>>({ resolver: signUpResolver });
   // The same answer whether or not the address already has an account: its
   // owner gets an e-mail about the attempt instead (lib/auth/server.ts).
   if (sentTo)
@@ -189,7 +195,7 @@ export function SignUpForm() {
 
 export function ForgotPasswordForm() {
   const [sent, setSent] = useState(false);
-  const form = useForm<z.infer<typeof forgotPasswordSchema>>({ resolver: zodResolver(forgotPasswordSchema) });
+  const form = useForm<z.infer<typeof forgotPasswordSchema>>({ resolver: forgotResolver });
   if (sent)
     return (
       <Alert tone="success" title="Check your inbox">
@@ -219,7 +225,7 @@ export function ResetPasswordForm() {
   const params = useSearchParams();
   const token = params.get("token");
   const [expired, setExpired] = useState(!!params.get("error"));
-  const form = useForm<z.infer<typeof resetPasswordSchema>>({ resolver: zodResolver(resetPasswordSchema) });
+  const form = useForm<z.infer<typeof resetPasswordSchema>>({ resolver: resetResolver });
   if (!token)
     return (
       <Alert tone="error">

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { toast } from "sonner";
+import { toast } from "@/components/ui/toast";
 import { ConfirmButton } from "@/components/household/confirm-button";
 import { setAccountDisabled } from "../actions";
 
