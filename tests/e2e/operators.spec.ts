@@ -56,6 +56,10 @@ test("an operator searches, disables and re-enables an account with confirmation
   await expect(audit).toContainText(demoAccounts.tomas.email);
   await noSidewaysScroll(page);
 
+  // On a phone the "enabled" toast sits over the header's links; a pointer resting on it keeps it open
+  // (the toast library pauses on hover), so wait until it has gone, as a person would, before using them.
+  await page.mouse.move(5, 830);
+  await expect(page.locator("[data-sonner-toast]")).toHaveCount(0, { timeout: 15_000 });
   await page.getByRole("link", { name: "Shops" }).click();
   await page.getByLabel("Search by shop name or town").fill("quillby");
   await page.getByRole("button", { name: "Search" }).click();
