@@ -9,7 +9,7 @@ import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import * as schema from "@/db/schema";
 import { appUrl, env } from "@/lib/env";
-import { sendEmail } from "@/lib/email/send";
+import { sendEmail, sendEmailInBackground } from "@/lib/email/send";
 import PasswordResetEmail from "@/emails/password-reset";
 import SignUpAttemptEmail from "@/emails/sign-up-attempt";
 import VerifyEmail from "@/emails/verify-email";
@@ -49,12 +49,12 @@ function createAuth() {
       requireEmailVerification: true,
       // Not awaited, like every mail below that depends on whether the address has an account.
       onExistingUserSignUp: async ({ user }) => {
-        void sendEmail({
+        sendEmailInBackground({
           to: user.email,
           subject: "Someone tried to sign up with your address",
           kind: "sign-up-attempt",
           react: createElement(SignUpAttemptEmail, { name: user.name, signInUrl: `${appUrl()}/sign-in`, resetUrl: `${appUrl()}/forgot-password` }),
-        }).catch((err: unknown) => console.error(err));
+        });
       },
       // Following the reset link proves the address as well as the verification link does.
       onPasswordReset: async ({ user }) => {
@@ -62,12 +62,12 @@ function createAuth() {
       },
       // Not awaited: the answer must not take longer for an address that has an account.
       sendResetPassword: async ({ user, url }) => {
-        void sendEmail({
+        sendEmailInBackground({
           to: user.email,
           subject: "Choose a new Fourpatch password",
           kind: "password-reset",
           react: createElement(PasswordResetEmail, { name: user.name, resetUrl: url }),
-        }).catch((err: unknown) => console.error(err));
+        });
       },
     },
     emailVerification: {
@@ -78,12 +78,12 @@ function createAuth() {
       autoSignInAfterVerification: true,
       expiresIn: 60 * 60 * 24,
       sendVerificationEmail: async ({ user, url }) => {
-        void sendEmail({
+        sendEmailInBackground({
           to: user.email,
           subject: "Confirm your address for Fourpatch",
           kind: "verify-email",
           react: createElement(VerifyEmail, { name: user.name, verifyUrl: url }),
-        }).catch((err: unknown) => console.error(err));
+        });
       },
       afterEmailVerification: async (user) => {
         await sendEmail({

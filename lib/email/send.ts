@@ -79,6 +79,15 @@ export async function sendEmail(input: SendEmailInput): Promise<SendEmailResult>
   return { ok: true, id: data.id };
 }
 
+/**
+ * Sends without making the caller wait: for answers that must take the same
+ * time whether or not an address has an account (sign-up, reset). A failure
+ * is logged, never thrown.
+ */
+export function sendEmailInBackground(input: SendEmailInput): void {
+  void sendEmail(input).catch((err: unknown) => console.error(err));
+}
+
 /** Only for tests: drop the cached SDK client after changing the environment. */
 export function resetEmailClientForTests() {
   client = undefined;
