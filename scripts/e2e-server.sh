@@ -14,6 +14,8 @@ export FOURPATCH_SCHEDULER="off"
 export FOURPATCH_AUTH_RATE_LIMIT="off"
 export CRON_SECRET="e2e-cron-secret"
 export FOURPATCH_DEV_FAKES="on"
+# Answers served from memory are computed again and compared (db/revision.ts).
+export FOURPATCH_CACHE_CHECK="1"
 unset DATABASE_URL RESEND_API_KEY STRIPE_SECRET_KEY
 
 if [ "${E2E_SKIP_BUILD:-0}" != "1" ] || [ ! -f "$NEXT_DIST_DIR/BUILD_ID" ]; then

@@ -25,6 +25,7 @@ import { axlePattern, distancePerDay, type Jurisdiction, type OdometerEntry, typ
 import { remindersFor } from "./reminders";
 import { loadLogbookRows, toLogbookInput } from "./logbook-input";
 import { assertVehicleAccess, driverVehicles, type VehicleRole } from "./access";
+import { underStamp, vehicleStamp } from "@/db/revision";
 import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireCondition, type TireView } from "./logbook-view";
 
 type Db = Transaction | typeof db;
@@ -169,6 +170,15 @@ export async function getVehicleLogbook({
   action?: string;
 } & LoadOptions): Promise<VehicleLogbook> {
   const role = await assertVehicleAccess(access, { vehicleId, action });
+  // Read after the access check: under a pass it counts the read into the access log, which the owner's logbook shows.
+  const stamp = await vehicleStamp(vehicleId);
+  const passId = access.kind === "pass" ? access.passId : "";
+  const key = ["book", vehicleId, access.userId, role, passId, opts.setId ?? "", opts.includeRetired ? 1 : 0, opts.historyLimit ?? HISTORY_PAGE, today].join("|");
+  return underStamp(key, stamp, () => computeLogbook({ access, role, vehicleId, today, ...opts }));
+}
+
+/** The logbook itself, for a reader whose access was checked. */
+async function computeLogbook({ access, role, vehicleId, today, ...opts }: { access: LogbookAccess; role: VehicleRole; vehicleId: string; today: string } & LoadOptions): Promise<VehicleLogbook> {
   const limit = opts.historyLimit ?? HISTORY_PAGE;
   const [v] = await db.select().from(vehicle).where(eq(vehicle.id, vehicleId)).limit(1);
   if (!v) throw notFound("That vehicle");

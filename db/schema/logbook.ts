@@ -9,11 +9,14 @@ import {
   integer,
   pgEnum,
   pgTable,
-
+  smallint,
+  bigint,
+  check,
   text,
   timestamp,
   uuid,
 } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
 import { organization, user } from "./auth";
 
 const tz = (name: string) => timestamp(name, { withTimezone: true });
@@ -241,3 +244,33 @@ export type TreadReading = typeof treadReading.$inferSelect;
 export type ServiceEntry = typeof serviceEntry.$inferSelect;
 export type Attachment = typeof attachment.$inferSelect;
 
+
+/**
+ * When a vehicle's logbook last changed, as a number that only grows (the
+ * next value of logbook_revision_seq): set by database triggers (migration
+ * 0012) on every insert, update or delete of the vehicle
+ * and of its sets, tires, checks, readings, service entries, attachments,
+ * odometer readings and access-log rows, whoever writes them. A vehicle
+ * without a row has not changed since the triggers came. Read answers are
+ * kept in memory under this number (db/revision.ts) and served again while
+ * it stands.
+ */
+export const logbookRevision = pgTable("logbook_revision", {
+  vehicleId: uuid("vehicle_id")
+    .primaryKey()
+    .references(() => vehicle.id, { onDelete: "cascade" }),
+  revision: bigint("revision", { mode: "number" }).notNull().default(0),
+});
+
+/**
+ * One number for what many logbooks show but no vehicle owns: people's and
+ * shops' names, drivers' settings. Set by triggers like logbookRevision.
+ */
+export const sharedRevision = pgTable(
+  "shared_revision",
+  {
+    id: smallint("id").primaryKey().default(1),
+    revision: bigint("revision", { mode: "number" }).notNull().default(0),
+  },
+  (t) => [check("shared_revision_one_row", sql`${t.id} = 1`)],
+);

@@ -12,6 +12,8 @@ process.env.BETTER_AUTH_SECRET = "integration-tests-secret-0123456789abcdef";
 process.env.FOURPATCH_AUTH_RATE_LIMIT = "off";
 process.env.FOURPATCH_SCHEDULER = "off";
 process.env.FOURPATCH_DEV_FAKES = "on";
+// Every answer served from memory is computed again and compared (db/revision.ts): a write path that does not move a stamp fails its test.
+process.env.FOURPATCH_CACHE_CHECK = "1";
 delete process.env.DATABASE_URL;
 // Process-wide singletons (db client, auth) must not leak from one test file into the next.
 for (const key of ["__fourpatchDb", "__fourpatchMigrated", "__fourpatchAuth"]) delete (globalThis as Record<string, unknown>)[key];

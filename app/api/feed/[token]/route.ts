@@ -7,6 +7,7 @@
 // per poll: the content's tag only when it changes, the fetch time hourly.
 import { createHash } from "node:crypto";
 import { computeFor, feedForToken, noteFeedContent, reminderProfile } from "@/db/queries/reminders";
+import { driverStamp, underStamp } from "@/db/revision";
 import { todayIn } from "@/lib/reminders/describe";
 import { buildFeed } from "@/lib/reminders/feed";
 import { tokenFromPath } from "@/lib/reminders/token";
@@ -50,14 +51,21 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
   const profile = await reminderProfile({ userId: feed.userId });
   if (!profile) return notFound();
   // "Today" is the driver's own date: it decides what is overdue.
-  const { items } = await computeFor({ profile, today: todayIn(profile.timezone, now) });
+  const today = todayIn(profile.timezone, now);
   const baseUrl = appUrl();
   const alarms = planAllows({ plan: profile.plan, feature: "alarms" }) ? profile.settings.alarmLeadDays : [];
-  // Everything the body is made of, except the stamp (which follows the content's time).
-  const tag = createHash("sha256")
-    .update(JSON.stringify({ v: 1, items, plan: profile.plan, timezone: profile.timezone, alarms, baseUrl }))
-    .digest("base64url")
-    .slice(0, 32);
+  // The reminders are computed again only when the driver's logbooks, names or settings changed (db/revision.ts).
+  const stamp = await driverStamp(profile.userId);
+  const inputs = JSON.stringify({ today, plan: profile.plan, timezone: profile.timezone, jurisdiction: profile.jurisdiction, settings: profile.settings, baseUrl });
+  const { items, tag } = await underStamp(`feed|${profile.userId}|${inputs}`, stamp, async () => {
+    const { items } = await computeFor({ profile, today });
+    // Everything the body is made of, except the stamp (which follows the content's time).
+    const tag = createHash("sha256")
+      .update(JSON.stringify({ v: 1, items, plan: profile.plan, timezone: profile.timezone, alarms, baseUrl }))
+      .digest("base64url")
+      .slice(0, 32);
+    return { items, tag };
+  });
   const changedAt = await noteFeedContent({ feed, tag, now });
   const etag = `"${tag}"`;
   const validators = {
@@ -75,15 +83,18 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
     : ifModifiedSince != null && !Number.isNaN(Date.parse(ifModifiedSince)) && changedAt.getTime() <= Date.parse(ifModifiedSince);
   if (notModified) return new Response(null, { status: 304, headers: validators });
 
-  const body = buildFeed({
-    items,
-    plan: profile.plan,
-    timezone: profile.timezone,
-    alarmLeadDays: profile.settings.alarmLeadDays,
-    baseUrl,
-    // DTSTAMP follows the content, so the same content is the same bytes.
-    now: changedAt,
-  });
+  // The same content at the same time is the same bytes: kept beside the items.
+  const body = await underStamp(`feed-body|${tag}|${changedAt.getTime()}|${JSON.stringify(profile.settings.alarmLeadDays)}`, "fixed", async () =>
+    buildFeed({
+      items,
+      plan: profile.plan,
+      timezone: profile.timezone,
+      alarmLeadDays: profile.settings.alarmLeadDays,
+      baseUrl,
+      // DTSTAMP follows the content, so the same content is the same bytes.
+      now: changedAt,
+    }),
+  );
   return new Response(body, {
     status: 200,
     headers: {
