@@ -53,7 +53,10 @@ function open(): Client {
   // autovacuum. The write-ahead log only shrinks at a CHECKPOINT, which
   // db/maintenance.ts runs after bulk changes and on a timer; these bound
   // what a checkpoint keeps.
-  const options = { postgresqlconf: ["max_wal_size = 64MB", "min_wal_size = 32MB"] };
+  // PostgreSQL's own default of 128 MB of shared buffers is touched at start
+  // and stays resident; a household's logbooks fit in far less, and the
+  // operating system caches the folder's files besides.
+  const options = { postgresqlconf: ["max_wal_size = 64MB", "min_wal_size = 32MB", `shared_buffers = ${env().FOURPATCH_PGLITE_BUFFERS_MB}MB`] };
   if (!dataDir.startsWith("memory://")) {
     folder = path.resolve(/*turbopackIgnore: true*/ dataDir);
     // Created first, so that the lock is named after the folder's real path.

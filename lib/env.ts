@@ -12,6 +12,7 @@ const schema = z.object({
   // Where PGlite's WebAssembly runs: in a worker thread (default), so that a
   // heavy query never freezes the request thread, or in the server's own thread.
   FOURPATCH_PGLITE_THREAD: z.preprocess(blankToUndefined, z.enum(["worker", "main"]).default("worker")),
+  FOURPATCH_PGLITE_BUFFERS_MB: z.preprocess(blankToUndefined, z.coerce.number().int().min(8).max(1024).default(32)),
   // When set, a real PostgreSQL server is used instead of PGlite.
   DATABASE_URL: optional(),
   BETTER_AUTH_SECRET: optional(),

@@ -8,7 +8,7 @@
 // of the same run, the server's peak RSS, the data folder's size and EXPLAIN
 // verdicts, then the budgets as pass / fall short. Not part of `npm test`.
 //
-// BENCH_SECONDS (default 8) per endpoint; BENCH_SIZES=demo,large;
+// BENCH_SECONDS (default 8) per endpoint, after BENCH_WARM_SECONDS (2) not counted; BENCH_SIZES=demo,large;
 // BENCH_SKIP_BUILD=1 reuses .next-bench; BENCH_REUSE_DATA=1 keeps loaded folders;
 // BENCH_SKIP_CORE=1 skips the computation core; BENCH_PORT (default 3390, and the next one);
 // BENCH_EXPLAIN_ONLY=1 (with BENCH_DIR) prints the EXPLAIN verdicts of folders loaded before.
@@ -28,6 +28,8 @@ import { benchCore } from "./bench/core";
 const root = path.resolve(import.meta.dirname, "..");
 const QUICK = process.env.BENCH_QUICK === "1";
 const SECONDS = Number(process.env.BENCH_SECONDS ?? (QUICK ? 3 : 8));
+/** Uncounted warm-up per endpoint (BENCH_WARM_SECONDS). */
+const WARM_SECONDS = Number(process.env.BENCH_WARM_SECONDS ?? 2);
 const THREADS = (process.env.BENCH_THREADS ?? "worker").split(",").filter((s) => s === "worker" || s === "main") as ("worker" | "main")[];
 const SIZES = (process.env.BENCH_SIZES ?? "demo,large").split(",").filter((s) => s === "demo" || s === "large") as ("demo" | "large")[];
 const DIST = ".next-bench";
@@ -330,6 +332,9 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
       // One request first: its status and size, and a warm route.
       const first = await fetch(`${base}${e.path}`, { method: e.method ?? "GET", headers, body: e.body?.() });
       const bytes = (await first.arrayBuffer()).byteLength;
+      // Then a short run that is not counted: V8 compiles the route's hot code
+      // in the first thousand requests or so, and a cold start would measure the compiler.
+      await cannon({ url: `${base}${e.path}`, method: e.method ?? "GET", headers, body: e.body?.(), connections: 10, duration: WARM_SECONDS });
       const cpu0 = serverCpu(pgid);
       const r = await cannon({
         url: `${base}${e.path}`,

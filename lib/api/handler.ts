@@ -174,4 +174,20 @@ export async function parseJson<S extends z.ZodType>(req: Request, schema: S): P
   return parsed.data;
 }
 
+const jsonOfKept = new WeakMap<object, string>();
+
+/**
+ * A JSON answer for an object that may be served many times (the answers
+ * db/revision.ts keeps): its text is made once per object, not per request.
+ * Same headers as route()'s own JSON answers.
+ */
+export function keptJsonResponse(value: object): Response {
+  let text = jsonOfKept.get(value);
+  if (text === undefined) {
+    text = JSON.stringify(value);
+    jsonOfKept.set(value, text);
+  }
+  return new Response(text, { headers: { "content-type": "application/json", "cache-control": "private, no-store" } });
+}
+
 export const created = (body: unknown) => NextResponse.json(body, { status: 201, headers: { "cache-control": "private, no-store" } });

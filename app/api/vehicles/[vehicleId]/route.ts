@@ -1,5 +1,5 @@
 // One vehicle's whole logbook; change or delete the vehicle (owner only).
-import { parseJson, route } from "@/lib/api/handler";
+import { keptJsonResponse, parseJson, route } from "@/lib/api/handler";
 import { assertVehicleAccess } from "@/db/queries/access";
 import { getVehicleLogbook } from "@/db/queries/logbook";
 import { deleteVehicle, updateVehicle } from "@/db/queries/vehicles";
@@ -9,7 +9,7 @@ import { todayIso, vehicleUpdateSchema } from "@/lib/validation/logbook";
 type P = { vehicleId: string };
 
 export const GET = route<P>(async ({ params, session }) =>
-  getVehicleLogbook({ access: ownerAccess(session!), vehicleId: params.vehicleId, today: todayIso() }),
+  keptJsonResponse(await getVehicleLogbook({ access: ownerAccess(session!), vehicleId: params.vehicleId, today: todayIso() })),
 );
 
 export const PATCH = route<P>(async ({ req, params, session }) => {
