@@ -261,7 +261,8 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
     fs.cpSync(dataDir, served, { recursive: true });
   }
   const base = `http://127.0.0.1:${port}`;
-  const server: ChildProcess = spawn("npx", ["next", "start", "-H", "127.0.0.1", "-p", String(port)], {
+  // The production start (scripts/start.sh: next start with its heap bound).
+  const server: ChildProcess = spawn("bash", ["scripts/start.sh", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: root,
     detached: true,
     stdio: ["ignore", "ignore", "inherit"],

@@ -27,4 +27,4 @@ if [ ! -f "$FOURPATCH_DATA_DIR/.demo-loaded" ]; then
 fi
 
 echo "Fourpatch runs on $BETTER_AUTH_URL (stop it with Ctrl-C)."
-exec npx next start -p "$PORT"
+exec bash scripts/start.sh -p "$PORT"

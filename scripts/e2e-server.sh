@@ -25,4 +25,4 @@ fi
 if [ "${E2E_BUILD_ONLY:-0}" = "1" ]; then exit 0; fi
 rm -rf "$FOURPATCH_DATA_DIR"
 npm run --silent db:seed
-exec npx next start -p "$PORT"
+exec bash scripts/start.sh -p "$PORT"
