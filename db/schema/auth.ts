@@ -1,6 +1,7 @@
 // Tables that better-auth reads and writes (core + organization + admin
 // plugins). Field names follow the library; columns are snake_case.
-import { boolean, index, pgTable, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import { bigint, boolean, check, index, pgTable, smallint, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
 
 const tz = (name: string) => timestamp(name, { withTimezone: true });
 
@@ -125,4 +126,19 @@ export const invitation = pgTable(
     // Deleting a user cascades to the invitations they sent.
     index("invitation_inviter_id_idx").on(t.inviterId),
   ],
+);
+
+/**
+ * One number for the sessions and accounts a server may remember: raised by
+ * triggers (migration 0014) on any change or deletion of a session or a
+ * user, never by a new session. lib/auth/session.ts keeps a confirmed
+ * session in memory while this number stands.
+ */
+export const sessionRevision = pgTable(
+  "session_revision",
+  {
+    id: smallint("id").primaryKey().default(1),
+    revision: bigint("revision", { mode: "number" }).notNull().default(0),
+  },
+  (t) => [check("session_revision_one_row", sql`${t.id} = 1`)],
 );
