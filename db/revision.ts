@@ -34,15 +34,13 @@ const cache = new LRUCache<string, Entry>({
 
 const shared = sql<number>`coalesce((select ${sharedRevision.revision} from ${sharedRevision} where ${sharedRevision.id} = 1), 0)`;
 
-/** One vehicle's stamp: its logbook's revision and the shared one. */
+/** A vehicle's stamp as a column of a query over `vehicle`: its logbook's revision and the shared one. */
+export const stampOfVehicle = sql<string>`(coalesce((select ${logbookRevision.revision} from ${logbookRevision} where ${logbookRevision.vehicleId} = ${vehicle.id}), 0) || '.' || ${shared})`;
+
+/** One vehicle's stamp. */
 export async function vehicleStamp(vehicleId: string): Promise<string> {
-  const [row] = await db
-    .select({ revision: sql<number>`coalesce(${logbookRevision.revision}, 0)`, shared })
-    .from(vehicle)
-    .leftJoin(logbookRevision, eq(logbookRevision.vehicleId, vehicle.id))
-    .where(eq(vehicle.id, vehicleId))
-    .limit(1);
-  return row ? `${row.revision}.${row.shared}` : "gone";
+  const [row] = await db.select({ stamp: stampOfVehicle }).from(vehicle).where(eq(vehicle.id, vehicleId)).limit(1);
+  return row?.stamp ?? "gone";
 }
 
 /** A driver's stamp: which vehicles they own or keep, each one's revision, and the shared one. */

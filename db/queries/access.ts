@@ -9,6 +9,7 @@ import "server-only";
 import { and, eq, inArray, or, sql, type SQL } from "drizzle-orm";
 import { db, type Transaction } from "@/db";
 import { accessLog, member, shopPass, shopPassVehicle, vehicle, vehicleKeeper } from "@/db/schema";
+import { stampOfVehicle, vehicleStamp } from "@/db/revision";
 import { canWrite, type LogbookAccess } from "@/lib/auth/logbook-access";
 import { AppError, notFound } from "@/lib/errors";
 
@@ -33,10 +34,24 @@ export function visitStartOf(at: Date): Date {
 export type VehicleRole = "owner" | "keeper" | "pass";
 
 export async function assertVehicleAccess(access: LogbookAccess, check: VehicleCheck, tx: Transaction | typeof db = db): Promise<VehicleRole> {
+  return (await checkVehicleAccess(access, check, tx)).role;
+}
+
+/**
+ * assertVehicleAccess, and the vehicle's stamp (db/revision.ts) read after
+ * the check: for a driver in the same query, under a pass after the read was
+ * counted into the access log (which the owner's logbook shows).
+ */
+export async function assertVehicleAccessWithStamp(access: LogbookAccess, check: VehicleCheck): Promise<{ role: VehicleRole; stamp: string }> {
+  const { role, stamp } = await checkVehicleAccess(access, check, db);
+  return { role, stamp: stamp ?? (await vehicleStamp(check.vehicleId)) };
+}
+
+async function checkVehicleAccess(access: LogbookAccess, check: VehicleCheck, tx: Transaction | typeof db): Promise<{ role: VehicleRole; stamp?: string }> {
   if (!/^[0-9a-f-]{36}$/i.test(check.vehicleId)) throw notFound("That vehicle");
   if (access.kind === "owner") {
     const [row] = await tx
-      .select({ ownerId: vehicle.ownerId, keeperId: vehicleKeeper.id })
+      .select({ ownerId: vehicle.ownerId, keeperId: vehicleKeeper.id, stamp: stampOfVehicle })
       .from(vehicle)
       .leftJoin(
         vehicleKeeper,
@@ -45,10 +60,14 @@ export async function assertVehicleAccess(access: LogbookAccess, check: VehicleC
       .where(and(eq(vehicle.id, check.vehicleId), or(eq(vehicle.ownerId, access.userId), eq(vehicleKeeper.state, "active"))))
       .limit(1);
     if (!row) throw notFound("That vehicle");
-    if (row.ownerId === access.userId) return "owner";
+    if (row.ownerId === access.userId) return { role: "owner", stamp: row.stamp };
     if (check.ownerOnly) throw new AppError("forbidden", "Only the vehicle's owner can do that; co-keepers keep the logbook.");
-    return "keeper";
+    return { role: "keeper", stamp: row.stamp };
   }
+  return { role: await passAccess(access, check, tx) };
+}
+
+async function passAccess(access: Extract<LogbookAccess, { kind: "pass" }>, check: VehicleCheck, tx: Transaction | typeof db): Promise<VehicleRole> {
   if (check.ownerOnly) throw new AppError("forbidden", "Only the vehicle's owner can do that.");
   if (!access.vehicleIds.includes(check.vehicleId)) throw notFound("That vehicle");
   const now = check.now ?? new Date();

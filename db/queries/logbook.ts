@@ -24,8 +24,8 @@ import { AppError, notFound } from "@/lib/errors";
 import { axlePattern, distancePerDay, type Jurisdiction, type OdometerEntry, type ReminderItem } from "@/lib/tires";
 import { remindersFor } from "./reminders";
 import { loadLogbookRows, toLogbookInput } from "./logbook-input";
-import { assertVehicleAccess, driverVehicles, type VehicleRole } from "./access";
-import { underStamp, vehicleStamp } from "@/db/revision";
+import { assertVehicleAccessWithStamp, driverVehicles, type VehicleRole } from "./access";
+import { underStamp } from "@/db/revision";
 import { CAUTION, jurisdictionOf, limitFor, setCondition, tireView, type LimitView, type ReadingRow, type TireCondition, type TireView } from "./logbook-view";
 
 type Db = Transaction | typeof db;
@@ -169,9 +169,8 @@ export async function getVehicleLogbook({
   today: string;
   action?: string;
 } & LoadOptions): Promise<VehicleLogbook> {
-  const role = await assertVehicleAccess(access, { vehicleId, action });
-  // Read after the access check: under a pass it counts the read into the access log, which the owner's logbook shows.
-  const stamp = await vehicleStamp(vehicleId);
+  // The stamp is read with (or, under a pass, after) the access check: a pass's read is counted into the access log, which the owner's logbook shows.
+  const { role, stamp } = await assertVehicleAccessWithStamp(access, { vehicleId, action });
   const passId = access.kind === "pass" ? access.passId : "";
   const key = ["book", vehicleId, access.userId, role, passId, opts.setId ?? "", opts.includeRetired ? 1 : 0, opts.historyLimit ?? HISTORY_PAGE, today].join("|");
   return underStamp(key, stamp, () => computeLogbook({ access, role, vehicleId, today, ...opts }));
