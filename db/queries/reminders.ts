@@ -5,8 +5,9 @@ import "server-only";
 import { and, eq, inArray, isNull, lt, or, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
-import { driverProfile, emailOptOut, reminderDelivery, reminderFeed, user } from "@/db/schema";
-import { planOf, plusSql } from "@/db/queries/billing";
+import { billingSubscription, driverProfile, emailOptOut, reminderDelivery, reminderFeed, user } from "@/db/schema";
+import { plusSql } from "@/db/queries/billing";
+import { planFromSubscriptions } from "@/lib/billing/entitlement";
 import { loadLogbookInput } from "@/db/queries/logbook-input";
 import { planAllowsKind, type Plan } from "@/lib/plan";
 import { hashFeedToken, newFeedToken } from "@/lib/reminders/token";
@@ -26,21 +27,31 @@ export type ReminderProfile = {
 };
 
 export async function reminderProfile({ userId }: { userId: string }): Promise<ReminderProfile | null> {
+  // One round trip (the calendar feed asks on every poll): the opt-outs and the subscriptions come as JSON beside the profile.
   const [row] = await db
-    .select({ p: driverProfile, name: user.name, email: user.email })
+    .select({
+      p: driverProfile,
+      name: user.name,
+      email: user.email,
+      optedOut: sql<string[]>`coalesce((select json_agg(${emailOptOut.kind}) from ${emailOptOut} where ${emailOptOut.userId} = ${driverProfile.userId}), '[]'::json)`,
+      subscriptions: sql<{ status: string; currentPeriodEnd: string | null }[]>`coalesce((select json_agg(json_build_object('status', ${billingSubscription.status}, 'currentPeriodEnd', ${billingSubscription.currentPeriodEnd})) from ${billingSubscription} where ${billingSubscription.userId} = ${driverProfile.userId}), '[]'::json)`,
+    })
     .from(driverProfile)
     .innerJoin(user, eq(user.id, driverProfile.userId))
     .where(eq(driverProfile.userId, userId))
     .limit(1);
   if (!row) return null;
-  const opt = await db.select({ kind: emailOptOut.kind }).from(emailOptOut).where(eq(emailOptOut.userId, userId));
+  const opt = row.optedOut.map((kind) => ({ kind }));
   const jurisdiction = (JURISDICTIONS as string[]).includes(row.p.jurisdiction) ? (row.p.jurisdiction as Jurisdiction) : "EU";
   return {
     userId,
     name: row.name,
     email: row.email,
-    // From the stored subscription (status and period end), never a column set by hand.
-    plan: await planOf({ userId }),
+    // From the stored subscriptions (status and period end), never a column set by hand; the same rule as planOf().
+    plan: planFromSubscriptions(
+      row.subscriptions.map((s) => ({ status: s.status, currentPeriodEnd: s.currentPeriodEnd ? new Date(s.currentPeriodEnd) : null })),
+      new Date(),
+    ),
     timezone: row.p.timezone,
     jurisdiction,
     emailReminders: row.p.emailReminders,
