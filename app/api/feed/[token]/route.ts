@@ -48,14 +48,14 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
   const now = new Date();
   const feed = await feedForToken({ token, now });
   if (!feed) return notFound();
-  const profile = await reminderProfile({ userId: feed.userId });
+  // The stamp is read before anything is computed, beside the profile (which is part of the key).
+  const [profile, stamp] = await Promise.all([reminderProfile({ userId: feed.userId }), driverStamp(feed.userId)]);
   if (!profile) return notFound();
   // "Today" is the driver's own date: it decides what is overdue.
   const today = todayIn(profile.timezone, now);
   const baseUrl = appUrl();
   const alarms = planAllows({ plan: profile.plan, feature: "alarms" }) ? profile.settings.alarmLeadDays : [];
   // The reminders are computed again only when the driver's logbooks, names or settings changed (db/revision.ts).
-  const stamp = await driverStamp(profile.userId);
   const inputs = JSON.stringify({ today, plan: profile.plan, timezone: profile.timezone, jurisdiction: profile.jurisdiction, settings: profile.settings, baseUrl });
   const { items, tag } = await underStamp(`feed|${profile.userId}|${inputs}`, stamp, async () => {
     const { items } = await computeFor({ profile, today });
