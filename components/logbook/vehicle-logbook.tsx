@@ -68,7 +68,7 @@ export function VehicleLogbookView({
   const depthUnit = depthUnitFor(book.viewer.units);
   const distanceUnit = v.odometerUnit;
   const mounted = book.sets.find((s) => s.state === "mounted") ?? null;
-  // The table needs the same array until the logbook itself changes (see HistoryTable).
+  // Rows are worked out again only when the logbook itself changes.
   const rows = useMemo(() => historyRows(book, depthUnit, f), [book, depthUnit, f]);
   const queryClient = useQueryClient();
   const deleteEntry = useCallback(
