@@ -4,6 +4,7 @@
 import dynamic from "next/dynamic";
 import type { SetKind } from "@/lib/tires";
 import { useQuery } from "@tanstack/react-query";
+import { QueryIsland } from "./query-island";
 import Link from "next/link";
 import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -29,7 +30,15 @@ const WearChart = dynamic(() => import("./wear-chart").then((m) => m.WearChart),
   loading: () => <div className="h-[22.5rem] w-full animate-pulse rounded bg-asphalt-50 sm:h-[26.5rem]" aria-label="Loading the wear chart" role="status" />,
 });
 
-export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: string }) {
+export function SetDetailView(props: { initial: SetDetail; saved?: string }) {
+  return (
+    <QueryIsland>
+      <SetDetailBody {...props} />
+    </QueryIsland>
+  );
+}
+
+function SetDetailBody({ initial, saved }: { initial: SetDetail; saved?: string }) {
   const f = useFormat();
   const { data } = useQuery({ queryKey: keys.set(initial.set.id), queryFn: () => api<SetDetail>(`/api/sets/${initial.set.id}`), initialData: initial });
   const d = data ?? initial;

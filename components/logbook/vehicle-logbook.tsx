@@ -5,6 +5,7 @@ import { FormActions } from "@/components/ui/form-actions";
 import { AccessLogTable } from "@/components/passes/access-log-table";
 import { VehicleSharing } from "@/components/household/vehicle-sharing";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { QueryIsland } from "./query-island";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
 import { useCallback, useMemo, useRef, useState } from "react";
@@ -49,7 +50,15 @@ function OlderHistory({ book }: { book: VehicleLogbook }) {
  * `queryUrl` and `canManage` let a shop's page show the same logbook under a
  * pass: read from its own route, without the owner's purchase and swap actions.
  */
-export function VehicleLogbookView({
+export function VehicleLogbookView(props: Parameters<typeof Logbook>[0]) {
+  return (
+    <QueryIsland>
+      <Logbook {...props} />
+    </QueryIsland>
+  );
+}
+
+function Logbook({
   initial,
   saved,
   queryUrl,
@@ -77,7 +86,7 @@ export function VehicleLogbookView({
       const entryId = rest.join("-");
       await api(kind === "c" ? `/api/checks/${entryId}` : `/api/service-entries/${entryId}`, { method: "DELETE" });
       toast.success(`${row.type} of ${f.date(row.date)} deleted.`);
-      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(id) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
+      await queryClient.invalidateQueries({ queryKey: keys.vehicle(id) });
     },
     [f, id, queryClient],
   );
@@ -262,10 +271,7 @@ function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: str
     mutationFn: () => api(`/api/vehicles/${vehicleId}/swap`, { body: { setId: set.id, storageLocation: storage, date, odometer, confirmLowerOdometer: confirmLower } }),
     onSuccess: async () => {
       setOpen(false);
-      await Promise.all([
-        queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }),
-        queryClient.invalidateQueries({ queryKey: keys.overview }),
-      ]);
+      await queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) });
     },
   });
   const err = swap.error instanceof ApiError ? swap.error : null;
