@@ -7,180 +7,119 @@
 // it does not know fails there rather than merging wrongly on a page.
 import { clsx, type ClassValue } from "clsx";
 
-const LENGTH = /^\[(?:-?[\d.]+(?:px|r?em|%|vh|vw|dvh|svh|lvh|pt|pc|cm|mm|in|ch|ex|lh|rlh|vmin|vmax)|(?:calc|min|max|clamp)\(.*\)|length:.*)\]$/;
+const LENGTH = /^\[(?:-?[\d.]+(?:px|r?em|%|[dsl]?v[hw]|pt|pc|cm|mm|in|ch|ex|r?lh|vmin|vmax)|(?:calc|min|max|clamp)\(.*\)|length:.*)\]$/;
 const SPACE = /^(?:\d+(?:\.\d+)?|\d+\/\d+|px|auto|full|screen|min|max|fit|[dsl]v[hw]|lh|\[.+\]|\(.+\))$/;
-const T_SHIRT = /^(?:\d?xs|sm|md|lg|\d?xl|base|none|prose)$/;
-const FONT_SIZE = /^(?:\d?xs|sm|base|lg|\d?xl)$/;
+const NUM = /^(?:\d+|auto|\[.+\])$/;
+const INT = /^\d+$/;
+const STYLE = /^(?:solid|dashed|dotted|double|hidden|none)$/;
+const ANY = /./;
+
+// Utility kinds by prefix: [prefixes, the value they take, the kind (the prefix when left out)].
+const RULES: [string, RegExp, string?][] = [
+  ["p px py pt pr pb pl ps pe m mx my mt mr mb ml ms me w h size top right bottom left basis inset inset-x inset-y gap gap-x gap-y", SPACE],
+  ["min-w min-h", SPACE],
+  ["max-w", /^(?:\d+|\d?xs|sm|md|lg|\d?xl|\[.+\])$/],
+  ["z opacity col-start row-start", NUM],
+  ["space-y scroll-mt grid-cols grid-flow auto-cols underline-offset overflow-x translate-x translate-y leading tracking whitespace cursor accent animate transition from to", ANY],
+  ["col-span", NUM, "col-start-end"],
+  ["row-span", NUM, "row-start-end"],
+  ["flex", /^(?:row|col)(?:-reverse)?$/, "flex-direction"],
+  ["flex", /^(?:wrap|nowrap|wrap-reverse)$/, "flex-wrap"],
+  ["flex", NUM],
+  ["shrink", INT],
+  ["items", /^(?:start|end|center|baseline)$/, "align-items"],
+  ["justify", /^(?:end|center|between)$/, "justify-content"],
+  ["self", /^center$/, "align-self"],
+  ["align", /^top$/, "vertical-align"],
+  ["text", /^(?:left|center|right)$/, "text-alignment"],
+  ["text", /^(?:\d?xs|sm|base|lg|\d?xl)$/, "font-size"],
+  ["text", LENGTH, "font-size"],
+  ["text", ANY, "text-color"],
+  ["font", /^(?:thin|extralight|light|normal|medium|semibold|bold|extrabold|black|\d+)$/, "font-weight"],
+  ["font", ANY, "font-family"],
+  ["break", /^(?:words|all)$/],
+  ["list", /^disc$/],
+  ["decoration bg", ANY],
+  ["border", INT, "border-w"],
+  ["border", STYLE, "border-style"],
+  ["border", ANY, "border-color"],
+  ["divide", ANY, "divide-color"],
+  ["rounded", ANY],
+  ["shadow", /^(?:lg|xl)$/],
+  ["shadow", ANY, "shadow-color"],
+  ["ring", INT, "ring-w"],
+  ["ring", ANY, "ring-color"],
+  ["outline", /^none$/, "outline-style"],
+  ["outline", INT, "outline-w"],
+  ["overflow", /^auto$/],
+  ["pointer-events", /^none$/],
+  ["border-t", INT, "border-w-t"],
+  ["border-b", INT, "border-w-b"],
+];
+
+/** Utilities without a value. */
+const EXACT = new Map<string, string>();
+for (const [k, list] of Object.entries({
+  display: "block inline-block inline flex inline-flex grid hidden contents table table-cell",
+  position: "static fixed absolute relative sticky",
+  sr: "sr-only",
+  "not-sr": "not-sr-only",
+  "text-overflow": "truncate",
+  "text-decoration": "underline no-underline",
+  "text-transform": "uppercase",
+  "fvn-spacing": "tabular-nums",
+  "border-collapse": "border-collapse",
+  "border-w": "border",
+  "border-w-t": "border-t",
+  "border-w-b": "border-b",
+  "ring-w": "ring",
+  "outline-w": "outline",
+  "backdrop-blur": "backdrop-blur",
+  "divide-y": "divide-y",
+  rounded: "rounded",
+  shrink: "shrink",
+  "transition-colors": "transition",
+})) for (const u of list.split(" ")) EXACT.set(u, k);
+
+const BY_PREFIX = new Map<string, [RegExp, string | undefined][]>();
+for (const [prefixes, test, kind] of RULES) {
+  for (const prefix of prefixes.split(" ")) BY_PREFIX.set(prefix, [...(BY_PREFIX.get(prefix) ?? []), [test, kind]]);
+}
 
 /** The kind of a utility (without its variants), or undefined for a class this does not know. */
 function kind(u: string): string | undefined {
   if (u.startsWith("-")) u = u.slice(1);
-  switch (u) {
-    case "block": case "inline-block": case "inline": case "flex": case "inline-flex": case "grid": case "inline-grid": case "hidden": case "contents": case "table": case "table-cell": case "table-row": case "flow-root": case "list-item":
-      return "display";
-    case "static": case "fixed": case "absolute": case "relative": case "sticky":
-      return "position";
-    case "sr-only":
-      return "sr";
-    case "not-sr-only":
-      return "not-sr";
-    case "truncate": case "text-ellipsis": case "text-clip":
-      return "text-overflow";
-    case "underline": case "no-underline": case "line-through": case "overline":
-      return "text-decoration";
-    case "uppercase": case "lowercase": case "capitalize": case "normal-case":
-      return "text-transform";
-    case "italic": case "not-italic":
-      return "font-style";
-    case "tabular-nums": case "proportional-nums":
-      return "fvn-spacing";
-    case "border-collapse": case "border-separate":
-      return "border-collapse";
-    case "grow": case "shrink":
-      return u;
-    case "transition":
-      return "transition";
-    case "rounded":
-      return "rounded";
-    case "shadow":
-      return "shadow";
-    case "border":
-      return "border-w";
-    case "ring":
-      return "ring-w";
-    case "outline":
-      return "outline-w";
-    case "blur": case "backdrop-blur":
-      return u;
-    case "divide-x": case "divide-y":
-      return u;
-  }
-  const dash = u.indexOf("-");
-  if (dash < 1 || dash === u.length - 1) return undefined;
-  const head = u.slice(0, dash);
-  const rest = u.slice(dash + 1);
-  const sub = (x: string) => rest.startsWith(`${x}-`) && rest.length > x.length + 1;
-  const after = (x: string) => rest.slice(x.length + 1);
-  switch (head) {
-    case "p": case "px": case "py": case "pt": case "pr": case "pb": case "pl": case "ps": case "pe":
-    case "m": case "mx": case "my": case "mt": case "mr": case "mb": case "ml": case "ms": case "me":
-    case "w": case "h": case "size": case "top": case "right": case "bottom": case "left": case "basis":
-      return SPACE.test(rest) ? head : undefined;
-    case "z": case "order": case "opacity":
-      return /^(\d+|auto|\[.+\])$/.test(rest) ? head : undefined;
-    case "inset":
-      return sub("x") ? (SPACE.test(after("x")) ? "inset-x" : undefined) : sub("y") ? (SPACE.test(after("y")) ? "inset-y" : undefined) : SPACE.test(rest) ? "inset" : undefined;
-    case "min": case "max":
-      return (sub("w") || sub("h")) && (SPACE.test(rest.slice(2)) || T_SHIRT.test(rest.slice(2))) ? `${head}-${rest[0]}` : undefined;
-    case "gap":
-      return sub("x") ? "gap-x" : sub("y") ? "gap-y" : SPACE.test(rest) ? "gap" : undefined;
-    case "space":
-      return sub("x") ? "space-x" : sub("y") ? "space-y" : undefined;
-    case "scroll":
-      return /^(m[trblxyse]?)-/.exec(rest) ? `scroll-${rest.slice(0, rest.indexOf("-"))}` : undefined;
-    case "flex":
-      return /^(row|col)(-reverse)?$/.test(rest) ? "flex-direction" : /^(wrap|nowrap|wrap-reverse)$/.test(rest) ? "flex-wrap" : /^(\d+|auto|initial|none|\[.+\])$/.test(rest) ? "flex" : undefined;
-    case "grow": case "shrink":
-      return /^(\d+|\[.+\])$/.test(rest) ? head : undefined;
-    case "grid":
-      return sub("cols") ? "grid-cols" : sub("rows") ? "grid-rows" : sub("flow") ? "grid-flow" : undefined;
-    case "col": case "row":
-      return sub("span") ? `${head}-start-end` : sub("start") ? `${head}-start` : sub("end") ? `${head}-end` : undefined;
-    case "auto":
-      return sub("cols") ? "auto-cols" : sub("rows") ? "auto-rows" : undefined;
-    case "items":
-      return /^(start|end|center|baseline|stretch)$/.test(rest) ? "align-items" : undefined;
-    case "justify":
-      return /^(start|end|center|between|around|evenly|stretch|normal)$/.test(rest) ? "justify-content" : undefined;
-    case "self":
-      return /^(auto|start|end|center|stretch|baseline)$/.test(rest) ? "align-self" : undefined;
-    case "align":
-      return /^(baseline|top|middle|bottom|text-top|text-bottom|sub|super)$/.test(rest) ? "vertical-align" : undefined;
-    case "text":
-      if (/^(left|center|right|justify|start|end)$/.test(rest)) return "text-alignment";
-      if (/^(wrap|nowrap|balance|pretty)$/.test(rest)) return "text-wrap";
-      return FONT_SIZE.test(rest) || LENGTH.test(rest) ? "font-size" : "text-color";
-    case "font":
-      return /^(thin|extralight|light|normal|medium|semibold|bold|extrabold|black|\d+)$/.test(rest) ? "font-weight" : "font-family";
-    case "leading": case "tracking": case "whitespace": case "cursor": case "accent": case "animate": case "transition": case "shadow":
-      return head === "shadow" && !T_SHIRT.test(rest) && rest !== "inner" ? "shadow-color" : head;
-    case "break":
-      return /^(normal|words|all|keep)$/.test(rest) ? "break" : undefined;
-    case "list":
-      return /^(inside|outside)$/.test(rest) ? "list-style-position" : /^(disc|decimal|none|\[.+\])$/.test(rest) ? "list-style-type" : undefined;
-    case "underline":
-      return sub("offset") ? "underline-offset" : undefined;
-    case "decoration":
-      return /^(solid|double|dotted|dashed|wavy)$/.test(rest) ? "text-decoration-style" : /^(auto|from-font|\d+)$/.test(rest) ? "text-decoration-thickness" : "text-decoration-color";
-    case "bg":
-      return /^(linear|radial|conic)-/.test(rest) || rest === "none" ? "bg-image" : /^(fixed|local|scroll)$/.test(rest) ? "bg-attachment" : /^(auto|cover|contain)$/.test(rest) ? "bg-size" : "bg-color";
-    case "from": case "via": case "to":
-      return `gradient-${head}`;
-    case "border": {
-      if (/^\d+$/.test(rest)) return "border-w";
-      const side = /^(x|y|t|r|b|l|s|e)(?:-(.+))?$/.exec(rest);
-      if (side) return !side[2] || /^\d+$/.test(side[2]) ? `border-w-${side[1]}` : `border-color-${side[1]}`;
-      return /^(solid|dashed|dotted|double|hidden|none)$/.test(rest) ? "border-style" : "border-color";
-    }
-    case "divide":
-      return /^[xy]-\d+$/.test(rest) ? `divide-${rest[0]}` : /^(solid|dashed|dotted|double|none)$/.test(rest) ? "divide-style" : "divide-color";
-    case "rounded": {
-      const side = /^(ss|se|es|ee|tl|tr|br|bl|s|e|t|r|b|l)(-|$)/.exec(rest);
-      return side ? `rounded-${side[1]}` : "rounded";
-    }
-    case "ring":
-      return /^\d+$/.test(rest) ? "ring-w" : sub("offset") ? "ring-offset" : "ring-color";
-    case "outline":
-      return /^(none|hidden|solid|dashed|dotted|double)$/.test(rest) ? "outline-style" : /^\d+$/.test(rest) ? "outline-w" : sub("offset") ? "outline-offset" : "outline-color";
-    case "overflow":
-      return sub("x") ? "overflow-x" : sub("y") ? "overflow-y" : /^(auto|hidden|clip|visible|scroll)$/.test(rest) ? "overflow" : undefined;
-    case "pointer":
-      return rest === "events-none" || rest === "events-auto" ? "pointer-events" : undefined;
-    case "translate":
-      return sub("x") ? "translate-x" : sub("y") ? "translate-y" : undefined;
-    case "backdrop":
-      return sub("blur") ? "backdrop-blur" : undefined;
+  if (EXACT.has(u)) return EXACT.get(u);
+  // The longest known prefix first: `inset-x-0` is inset-x before it is inset.
+  for (let dash = u.lastIndexOf("-"); dash > 0; dash = u.lastIndexOf("-", dash - 1)) {
+    const prefix = u.slice(0, dash);
+    const value = u.slice(dash + 1);
+    for (const [test, k] of BY_PREFIX.get(prefix) ?? []) if (value && test.test(value)) return k ?? prefix;
   }
   return undefined;
 }
 
-const PAD = ["px", "py", "ps", "pe", "pt", "pr", "pb", "pl"];
-const MAR = ["mx", "my", "ms", "me", "mt", "mr", "mb", "ml"];
+const PAD = ["px", "py", "pt", "pr", "pb", "pl"];
+const MAR = ["mx", "my", "mt", "mr", "mb", "ml"];
 /** Kinds that a utility of the key's kind also sets: a later one removes earlier ones of these (tailwind-merge's conflicting groups, the part the app needs). */
 const CONFLICTS: Record<string, string[]> = {
-  overflow: ["overflow-x", "overflow-y"],
-  inset: ["inset-x", "inset-y", "start", "end", "top", "right", "bottom", "left"],
-  "inset-x": ["start", "end", "right", "left"],
+  overflow: ["overflow-x"],
+  inset: ["inset-x", "inset-y", "top", "right", "bottom", "left"],
+  "inset-x": ["right", "left"],
   "inset-y": ["top", "bottom"],
-  flex: ["basis", "grow", "shrink"],
+  flex: ["shrink"],
   gap: ["gap-x", "gap-y"],
   p: PAD,
-  px: ["ps", "pe", "pr", "pl"],
+  px: ["pr", "pl"],
   py: ["pt", "pb"],
   m: MAR,
-  mx: ["ms", "me", "mr", "ml"],
+  mx: ["mr", "ml"],
   my: ["mt", "mb"],
   size: ["w", "h"],
   // Tailwind emits these after `sr-only`, so an earlier one would undo the hiding.
-  sr: ["not-sr", "position", "size", "w", "h", "p", ...PAD, "m", ...MAR, "overflow", "overflow-x", "overflow-y", "whitespace"],
+  sr: ["not-sr", "position", "size", "w", "h", "p", ...PAD, "m", ...MAR, "overflow", "overflow-x", "whitespace"],
   "not-sr": ["sr"],
-  rounded: ["rounded-s", "rounded-e", "rounded-t", "rounded-r", "rounded-b", "rounded-l", "rounded-ss", "rounded-se", "rounded-ee", "rounded-es", "rounded-tl", "rounded-tr", "rounded-br", "rounded-bl"],
-  "rounded-s": ["rounded-ss", "rounded-es"],
-  "rounded-e": ["rounded-se", "rounded-ee"],
-  "rounded-t": ["rounded-tl", "rounded-tr"],
-  "rounded-r": ["rounded-tr", "rounded-br"],
-  "rounded-b": ["rounded-br", "rounded-bl"],
-  "rounded-l": ["rounded-tl", "rounded-bl"],
-  "border-w": ["border-w-x", "border-w-y", "border-w-s", "border-w-e", "border-w-t", "border-w-r", "border-w-b", "border-w-l"],
-  "border-w-x": ["border-w-s", "border-w-e", "border-w-r", "border-w-l"],
-  "border-w-y": ["border-w-t", "border-w-b"],
-  "border-color": ["border-color-x", "border-color-y", "border-color-s", "border-color-e", "border-color-t", "border-color-r", "border-color-b", "border-color-l"],
-  "border-color-x": ["border-color-s", "border-color-e", "border-color-r", "border-color-l"],
-  "border-color-y": ["border-color-t", "border-color-b"],
-  translate: ["translate-x", "translate-y"],
-  "scroll-m": ["scroll-mx", "scroll-my", "scroll-ms", "scroll-me", "scroll-mt", "scroll-mr", "scroll-mb", "scroll-ml"],
-  "scroll-mx": ["scroll-ms", "scroll-me", "scroll-mr", "scroll-ml"],
-  "scroll-my": ["scroll-mt", "scroll-mb"],
+  "border-w": ["border-w-t", "border-w-b"],
 };
 /** Variants whose place in the list matters (`before:hover:` is not `hover:before:`). */
 const ORDERED = new Set(["*", "**", "after", "backdrop", "before", "details-content", "file", "first-letter", "first-line", "marker", "placeholder", "selection"]);
