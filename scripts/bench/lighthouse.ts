@@ -1,0 +1,62 @@
+// Lighthouse (12.2, the last line that runs on Node 20) on a few pages of a
+// running server: the phone form factor with Lighthouse's own simulated
+// throttling (its defaults), in Debian's Chromium (the one the browser tests
+// use; nothing is downloaded). Signed-in pages get the session cookie through
+// Lighthouse's extraHeaders. Used by scripts/bench.ts; budgets there.
+import * as chromeLauncher from "chrome-launcher";
+import lighthouse from "lighthouse";
+
+export const LIGHTHOUSE_CATEGORIES = ["performance", "accessibility", "best-practices"] as const;
+export type LighthouseCategory = (typeof LIGHTHOUSE_CATEGORIES)[number];
+
+export type LighthousePage = { name: string; path: string; cookie?: string };
+export type LighthouseResult = {
+  name: string;
+  path: string;
+  /** 0–100 per category. */
+  scores: Record<LighthouseCategory, number>;
+  /** Audits of the three categories that did not pass (a numeric audit passes from 0.9, as in Lighthouse's report). */
+  failing: { category: LighthouseCategory; id: string; title: string; score: number; display?: string }[];
+  /** The performance metrics, for reading a score. */
+  metrics: Record<string, string>;
+};
+
+const METRICS = ["first-contentful-paint", "largest-contentful-paint", "total-blocking-time", "cumulative-layout-shift", "speed-index"];
+
+export async function runLighthouse(base: string, pages: LighthousePage[]): Promise<LighthouseResult[]> {
+  const chrome = await chromeLauncher.launch({
+    chromePath: process.env.CHROMIUM_PATH ?? process.env.CHROME_PATH ?? "/usr/bin/chromium",
+    // As the browser tests start it (playwright.config.ts): no sandbox as root, nothing reaching out.
+    chromeFlags: ["--headless=new", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  });
+  try {
+    const out: LighthouseResult[] = [];
+    for (const page of pages) {
+      const run = await lighthouse(`${base}${page.path}`, {
+        port: chrome.port,
+        output: "json",
+        logLevel: "error",
+        onlyCategories: [...LIGHTHOUSE_CATEGORIES],
+        extraHeaders: page.cookie ? { Cookie: page.cookie } : undefined,
+      });
+      if (!run) throw new Error(`Lighthouse returned nothing for ${page.path}`);
+      const lhr = run.lhr;
+      if (lhr.runtimeError) throw new Error(`Lighthouse could not load ${page.path}: ${lhr.runtimeError.code} ${lhr.runtimeError.message}`);
+      const scores = Object.fromEntries(LIGHTHOUSE_CATEGORIES.map((c) => [c, Math.round((lhr.categories[c]?.score ?? 0) * 100)])) as Record<LighthouseCategory, number>;
+      const failing: LighthouseResult["failing"] = [];
+      for (const category of LIGHTHOUSE_CATEGORIES) {
+        for (const ref of lhr.categories[category]?.auditRefs ?? []) {
+          const a = lhr.audits[ref.id];
+          if (!a || a.score === null || a.scoreDisplayMode === "informative" || a.scoreDisplayMode === "notApplicable" || a.scoreDisplayMode === "manual") continue;
+          const passes = a.scoreDisplayMode === "binary" ? a.score === 1 : a.score >= 0.9;
+          if (!passes) failing.push({ category, id: a.id, title: a.title, score: a.score, display: a.displayValue });
+        }
+      }
+      const metrics = Object.fromEntries(METRICS.map((m) => [m, lhr.audits[m]?.displayValue ?? "—"]));
+      out.push({ name: page.name, path: page.path, scores, failing, metrics });
+    }
+    return out;
+  } finally {
+    await chrome.kill();
+  }
+}
