@@ -3,6 +3,11 @@
 // throttling (its defaults), in Debian's Chromium (the one the browser tests
 // use; nothing is downloaded). Signed-in pages get the session cookie through
 // Lighthouse's extraHeaders. Used by scripts/bench.ts; budgets there.
+//
+// The simulation scales the main thread's observed work by four, so another
+// process busy on the machine lowers the performance score: each page runs
+// `runs` times (BENCH_LIGHTHOUSE_RUNS, default 3) and the run with the median
+// performance score is the one reported, as Lighthouse's own docs advise.
 import * as chromeLauncher from "chrome-launcher";
 import lighthouse from "lighthouse";
 
@@ -19,11 +24,13 @@ export type LighthouseResult = {
   failing: { category: LighthouseCategory; id: string; title: string; score: number; display?: string }[];
   /** The performance metrics, for reading a score. */
   metrics: Record<string, string>;
+  /** The performance score of every run, lowest first (the result is the median run's). */
+  performanceRuns?: number[];
 };
 
 const METRICS = ["first-contentful-paint", "largest-contentful-paint", "total-blocking-time", "cumulative-layout-shift", "speed-index"];
 
-export async function runLighthouse(base: string, pages: LighthousePage[]): Promise<LighthouseResult[]> {
+export async function runLighthouse(base: string, pages: LighthousePage[], runs = Number(process.env.BENCH_LIGHTHOUSE_RUNS ?? 3)): Promise<LighthouseResult[]> {
   const chrome = await chromeLauncher.launch({
     chromePath: process.env.CHROMIUM_PATH ?? process.env.CHROME_PATH ?? "/usr/bin/chromium",
     // As the browser tests start it (playwright.config.ts): no sandbox as root, nothing reaching out.
@@ -32,31 +39,38 @@ export async function runLighthouse(base: string, pages: LighthousePage[]): Prom
   try {
     const out: LighthouseResult[] = [];
     for (const page of pages) {
-      const run = await lighthouse(`${base}${page.path}`, {
-        port: chrome.port,
-        output: "json",
-        logLevel: "error",
-        onlyCategories: [...LIGHTHOUSE_CATEGORIES],
-        extraHeaders: page.cookie ? { Cookie: page.cookie } : undefined,
-      });
-      if (!run) throw new Error(`Lighthouse returned nothing for ${page.path}`);
-      const lhr = run.lhr;
-      if (lhr.runtimeError) throw new Error(`Lighthouse could not load ${page.path}: ${lhr.runtimeError.code} ${lhr.runtimeError.message}`);
-      const scores = Object.fromEntries(LIGHTHOUSE_CATEGORIES.map((c) => [c, Math.round((lhr.categories[c]?.score ?? 0) * 100)])) as Record<LighthouseCategory, number>;
-      const failing: LighthouseResult["failing"] = [];
-      for (const category of LIGHTHOUSE_CATEGORIES) {
-        for (const ref of lhr.categories[category]?.auditRefs ?? []) {
-          const a = lhr.audits[ref.id];
-          if (!a || a.score === null || a.scoreDisplayMode === "informative" || a.scoreDisplayMode === "notApplicable" || a.scoreDisplayMode === "manual") continue;
-          const passes = a.scoreDisplayMode === "binary" ? a.score === 1 : a.score >= 0.9;
-          if (!passes) failing.push({ category, id: a.id, title: a.title, score: a.score, display: a.displayValue });
-        }
-      }
-      const metrics = Object.fromEntries(METRICS.map((m) => [m, lhr.audits[m]?.displayValue ?? "—"]));
-      out.push({ name: page.name, path: page.path, scores, failing, metrics });
+      const tries: LighthouseResult[] = [];
+      for (let i = 0; i < Math.max(1, runs); i++) tries.push(await once(chrome.port, base, page));
+      tries.sort((a, b) => a.scores.performance - b.scores.performance);
+      out.push({ ...tries[Math.floor((tries.length - 1) / 2)], performanceRuns: tries.map((t) => t.scores.performance) });
     }
     return out;
   } finally {
     await chrome.kill();
   }
+}
+
+async function once(port: number, base: string, page: LighthousePage): Promise<LighthouseResult> {
+  const run = await lighthouse(`${base}${page.path}`, {
+    port,
+    output: "json",
+    logLevel: "error",
+    onlyCategories: [...LIGHTHOUSE_CATEGORIES],
+    extraHeaders: page.cookie ? { Cookie: page.cookie } : undefined,
+  });
+  if (!run) throw new Error(`Lighthouse returned nothing for ${page.path}`);
+  const lhr = run.lhr;
+  if (lhr.runtimeError) throw new Error(`Lighthouse could not load ${page.path}: ${lhr.runtimeError.code} ${lhr.runtimeError.message}`);
+  const scores = Object.fromEntries(LIGHTHOUSE_CATEGORIES.map((c) => [c, Math.round((lhr.categories[c]?.score ?? 0) * 100)])) as Record<LighthouseCategory, number>;
+  const failing: LighthouseResult["failing"] = [];
+  for (const category of LIGHTHOUSE_CATEGORIES) {
+    for (const ref of lhr.categories[category]?.auditRefs ?? []) {
+      const a = lhr.audits[ref.id];
+      if (!a || a.score === null || a.scoreDisplayMode === "informative" || a.scoreDisplayMode === "notApplicable" || a.scoreDisplayMode === "manual") continue;
+      const passes = a.scoreDisplayMode === "binary" ? a.score === 1 : a.score >= 0.9;
+      if (!passes) failing.push({ category, id: a.id, title: a.title, score: a.score, display: a.displayValue });
+    }
+  }
+  const metrics = Object.fromEntries(METRICS.map((m) => [m, lhr.audits[m]?.displayValue ?? "—"]));
+  return { name: page.name, path: page.path, scores, failing, metrics };
 }
