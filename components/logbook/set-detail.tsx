@@ -22,7 +22,6 @@ import { useFormat } from "@/components/format/format-provider";
 // The forms that open on request load their code (and zod, react-hook-form) when opened.
 import { EditCheck, SetSettings, preloadEditEntry } from "./lazy-forms";
 import { TireList } from "./tire-list";
-// The chart draws its caption here; its plot (the chart library) loads after the page is shown.
 import { WearChart } from "./wear-chart";
 
 export function SetDetailView(props: { initial: SetDetail; saved?: string }) {

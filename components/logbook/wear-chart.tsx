@@ -1,23 +1,14 @@
 "use client";
-// The set page's wear chart. The caption, the axis switch and the key of the
-// limit zone are drawn here, in the page's HTML; the plot itself (recharts,
-// most of the page's JavaScript) loads after the page is shown, into a box
-// of its own height (no layout shift). The caption, not the plot arriving
-// later, is then what a phone sees first. The same facts are in the table
-// under the chart.
-import dynamic from "next/dynamic";
+// The set page's wear chart: the caption, the axis switch, the plot
+// (wear-plot.tsx, plain SVG) and the key of the limit zone, all in the page's
+// HTML. The same facts are in the table under the chart.
 import { useState } from "react";
 import type { TireView } from "@/db/queries/logbook-view";
 import { mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
 import { limitZone } from "@/lib/visual/tokens";
+import { HATCH_ID, WearPlot, type ChartAxis } from "./wear-plot";
 
-export type ChartAxis = "date" | "odometer";
-export const HATCH_ID = "fourpatch-limit-hatch";
 
-const WearPlot = dynamic(() => import("./wear-plot").then((m) => m.WearPlot), {
-  ssr: false,
-  loading: () => <div className="h-full w-full animate-pulse rounded bg-asphalt-50" aria-label="Loading the wear chart" role="status" />,
-});
 
 /** The hatch of the limit zone, so the zone reads in greyscale and in print as well as in colour. */
 function LimitHatch() {

@@ -40,13 +40,24 @@ export async function runLighthouse(base: string, pages: LighthousePage[], runs 
     const out: LighthouseResult[] = [];
     for (const page of pages) {
       const tries: LighthouseResult[] = [];
-      for (let i = 0; i < Math.max(1, runs); i++) tries.push(await once(chrome.port, base, page));
+      for (let i = 0; i < Math.max(1, runs); i++) tries.push(await again(() => once(chrome.port, base, page)));
       tries.sort((a, b) => a.scores.performance - b.scores.performance);
       out.push({ ...tries[Math.floor((tries.length - 1) / 2)], performanceRuns: tries.map((t) => t.scores.performance) });
     }
     return out;
   } finally {
     await chrome.kill();
+  }
+}
+
+/** Lighthouse now and then fails to record a trace (NO_NAVSTART, NO_FCP): such a run is made again, twice at most. */
+async function again<T>(f: () => Promise<T>): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await f();
+    } catch (e) {
+      if (attempt >= 3 || !(e instanceof Error && /NO_NAVSTART|NO_FCP|NO_TRACING_STARTED|NO_LCP/.test(e.message))) throw e;
+    }
   }
 }
 
