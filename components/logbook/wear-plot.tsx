@@ -71,8 +71,6 @@ export function WearPlot({ tires, limitMm, depthUnit, distanceUnit, axis }: { ti
   const span = Math.max(lastX - firstX, axis === "date" ? 90 * 86_400_000 : 3_000);
   const xMax = ends.length ? Math.max(lastX, Math.min(Math.max(...ends), Math.min(...ends) + span * 0.5)) : lastX;
   const unitLabel = depthUnit === "32nds" ? "32nds in" : "mm";
-  // Evenly spaced ticks, so labels never pile up where several projections end.
-  const ticks = xMax > firstX ? [0, 1, 2, 3, 4].map((i) => Math.round(firstX + ((xMax - firstX) * i) / 4)) : [firstX];
   const tickFormat = (v: number) => (axis === "date" ? f.monthYear(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
   const xFormat = (v: number) => (axis === "date" ? f.date(isoOf(v)) : `${f.number(v)} ${distanceUnit}`);
   const limit = y(limitMm);
@@ -80,7 +78,7 @@ export function WearPlot({ tires, limitMm, depthUnit, distanceUnit, axis }: { ti
   const step = niceStep(top);
   const yMax = Math.ceil(top / step) * step;
   const yTicks = Array.from({ length: Math.round(yMax / step) + 1 }, (_, i) => Math.round(i * step * 100) / 100);
-  const scene = { lines, firstX, xMax, ticks, yMax, yTicks, limit, watch: y(limitMm + DEPTH_WATCH_MARGIN_MM), plan: y(limitMm + DEPTH_PLAN_MARGIN_MM), unitLabel, tickFormat, xFormat };
+  const scene = { lines, firstX, xMax, yMax, yTicks, limit, watch: y(limitMm + DEPTH_WATCH_MARGIN_MM), plan: y(limitMm + DEPTH_PLAN_MARGIN_MM), unitLabel, tickFormat, xFormat };
 
   return <MeasuredPlot scene={scene} />;
 }
@@ -122,7 +120,6 @@ type Scene = {
   lines: { tire: TireView; points: { x: number; y: number }[]; projection: { x: number; y: number }[]; look: (typeof LOOK)[number]; name: string }[];
   firstX: number;
   xMax: number;
-  ticks: number[];
   yMax: number;
   yTicks: number[];
   limit: number;
@@ -137,11 +134,14 @@ const GRID = asphalt[200];
 const INK = asphalt[700];
 
 function Plot({ scene, width, height, className }: { scene: Scene; width: number; height: number; className: string }) {
-  const { lines, firstX, xMax, ticks, yMax, yTicks, limit, watch, plan, unitLabel, tickFormat, xFormat } = scene;
+  const { lines, firstX, xMax, yMax, yTicks, limit, watch, plan, unitLabel, tickFormat, xFormat } = scene;
   const left = 40;
   const right = width - 36;
   const top = 10;
   const bottom = height - 50; // the x labels, then the legend
+  // Evenly spaced ticks, so labels never pile up where several projections end; three on a phone.
+  const parts = right - left >= 400 ? 4 : 2;
+  const ticks = xMax > firstX ? Array.from({ length: parts + 1 }, (_, i) => Math.round(firstX + ((xMax - firstX) * i) / parts)) : [firstX];
   const sx = (v: number) => (xMax > firstX ? left + ((v - firstX) / (xMax - firstX)) * (right - left) : (left + right) / 2);
   const sy = (v: number) => bottom - (Math.min(Math.max(v, 0), yMax) / yMax) * (bottom - top);
   const clip = `wear-clip-${width}`;
