@@ -1,10 +1,12 @@
 "use client";
 // A page that failed on the server or in the browser: what happened, that
-// nothing half-saved stays behind, and ways forward.
-import Link from "next/link";
+// nothing half-saved stays behind, and ways forward. Every page loads this
+// boundary with the root layout, so it keeps to plain elements: next/link, the
+// Button component and their icons here were loaded a second time beside the
+// section layouts' own copies (~5 KiB on every page). Plain links also leave
+// a failed page by a full load, which is what a broken page wants.
 import { useEffect } from "react";
-import { Brand } from "@/components/shell/brand";
-import { Button } from "@/components/ui/button";
+import { BrandMark } from "@/components/shell/brand";
 import { buttonVariants } from "@/components/ui/button-variants";
 
 export default function ErrorPage({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
@@ -13,19 +15,24 @@ export default function ErrorPage({ error, reset }: { error: Error & { digest?: 
   }, []);
   return (
     <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center gap-4 px-6 py-10">
-      <Brand />
+      {/* eslint-disable-next-line @next/next/no-html-link-for-pages -- a full load on purpose (see above) */}
+      <a href="/" className="flex items-center gap-2 text-lg font-extrabold tracking-tight text-asphalt-950 no-underline">
+        <BrandMark />
+        Fourpatch
+      </a>
       <h1 className="text-2xl font-bold">Something went wrong on this page</h1>
       <p className="text-asphalt-700">
         Fourpatch could not show it. Anything you were saving was either saved whole or not at all: check the logbook, then try again.
       </p>
       {error.digest ? <p className="font-mono text-sm text-asphalt-600">Reference: {error.digest}</p> : null}
       <div className="flex flex-wrap gap-3">
-        <Button type="button" onClick={reset}>
+        <button type="button" onClick={reset} className={buttonVariants()}>
           Try again
-        </Button>
-        <Link href="/vehicles" className={buttonVariants({ variant: "secondary" })}>
+        </button>
+        {/* eslint-disable-next-line @next/next/no-html-link-for-pages -- a full load on purpose (see above) */}
+        <a href="/vehicles" className={buttonVariants({ variant: "secondary" })}>
           Back to my vehicles
-        </Link>
+        </a>
       </div>
     </main>
   );

@@ -15,7 +15,10 @@
 // BENCH_THREADS=worker,main serves each data set once per place PGlite runs
 // (FOURPATCH_PGLITE_THREAD) and prints them side by side; default: worker.
 // BENCH_QUICK=1: 3 s per endpoint, no computation core, no EXPLAIN, no
-// first-load JS (a few minutes with BENCH_SKIP_BUILD=1 BENCH_REUSE_DATA=1).
+// first-load JS, no Lighthouse (a few minutes with BENCH_SKIP_BUILD=1 BENCH_REUSE_DATA=1).
+// Lighthouse (scripts/bench/lighthouse.ts) runs on the demo after the first-load
+// JS; BENCH_LIGHTHOUSE_ONLY=1 runs just that, on the demo folder loaded before
+// (loading it if there is none) and the build there is (building if none).
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import zlib from "node:zlib";
@@ -24,9 +27,11 @@ import autocannon from "autocannon";
 import { PGlite } from "@electric-sql/pglite";
 import { acquireDataDirLock } from "@/db/lock";
 import { benchCore } from "./bench/core";
+import { runLighthouse, type LighthouseResult } from "./bench/lighthouse";
 
 const root = path.resolve(import.meta.dirname, "..");
 const QUICK = process.env.BENCH_QUICK === "1";
+const LIGHTHOUSE_ONLY = process.env.BENCH_LIGHTHOUSE_ONLY === "1";
 const SECONDS = Number(process.env.BENCH_SECONDS ?? (QUICK ? 3 : 8));
 /** Uncounted warm-up per endpoint (BENCH_WARM_SECONDS). */
 const WARM_SECONDS = Number(process.env.BENCH_WARM_SECONDS ?? 2);
@@ -247,7 +252,7 @@ type Stall = { aloneP50: number; aloneP99: number; besideP50: number; besideP99:
 async function benchSize(size: "demo" | "large", port: number, thread: "worker" | "main", loadData: boolean) {
   const dataDir = path.join(root, ".bench", size);
   const fixtureFile = path.join(root, ".bench", `${size}.json`);
-  if (loadData && (process.env.BENCH_REUSE_DATA !== "1" || !fs.existsSync(fixtureFile))) {
+  if (loadData && ((process.env.BENCH_REUSE_DATA !== "1" && !LIGHTHOUSE_ONLY) || !fs.existsSync(fixtureFile))) {
     fs.rmSync(dataDir, { recursive: true, force: true });
     const t0 = Date.now();
     run("npx", ["tsx", "--tsconfig", "scripts/tsconfig.json", "scripts/bench/load.ts", size, fixtureFile], { FOURPATCH_DATA_DIR: dataDir, DATABASE_URL: "" });
@@ -289,6 +294,13 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
   const results: Result[] = [];
   let stall: Stall | null = null;
   const firstLoad: { name: string; kib: number; scripts: number; htmlKib: number }[] = [];
+  let lighthouse: LighthouseResult[] = [];
+  const lighthousePages = (cookies: { ada: string; jo: string }) => [
+    { name: "landing /", path: "/" },
+    { name: "overview /vehicles", path: "/vehicles", cookie: cookies.ada },
+    { name: "set page", path: `/sets/${fx.adaSetId}`, cookie: cookies.ada },
+    ...(fx.passId ? [{ name: "technician view", path: `/shop/passes/${fx.passId}/${fx.passVehicleId}`, cookie: cookies.jo }] : []),
+  ];
   try {
     await waitFor(`${base}/api/auth/ok`, 120_000);
     const cookies = {
@@ -296,6 +308,10 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
       jo: await signIn(base, "jo@quillby-tread.test"),
       big: fx.bigCarId ? await signIn(base, fx.bigCarOwnerEmail) : "",
     };
+    if (LIGHTHOUSE_ONLY) {
+      lighthouse = await runLighthouse(base, lighthousePages(cookies));
+      return { size, thread, results, peak, dataBytes: 0, walBytes: 0, explains: [], stall, firstLoad, lighthouse };
+    }
     const feedPath = `/api/feed/${fx.feedToken}.ics`;
     const feedTag = (await fetch(`${base}${feedPath}`)).headers.get("etag");
     // Each tire's latest depth again: tread does not grow back, and a deeper reading is refused (409) unless confirmed.
@@ -389,6 +405,8 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
       }
       firstLoad.push({ name, kib: gz / 1024, scripts: srcs.length, htmlKib: Buffer.byteLength(html) / 1024 });
     }
+    // A phone's view of four pages: once, on the demo.
+    if (!QUICK && size === "demo" && thread === THREADS[0]) lighthouse = await runLighthouse(base, lighthousePages(cookies));
   } finally {
     clearInterval(sampler);
     peak = Math.max(peak, groupRssPeak(pgid).peakMb);
@@ -410,7 +428,20 @@ async function benchSize(size: "demo" | "large", port: number, thread: "worker" 
   const walDir = path.join(served, "pg_wal");
   const wal = fs.existsSync(walDir) ? du(walDir) : 0;
   const explains = QUICK ? [] : await explainAll(served, fx);
-  return { size, thread, results, peak, dataBytes: size_, walBytes: wal, explains, stall, firstLoad };
+  return { size, thread, results, peak, dataBytes: size_, walBytes: wal, explains, stall, firstLoad, lighthouse };
+}
+
+/** Lighthouse's scores and the audits that did not pass, against performance ≥ 95, accessibility 100, best practices ≥ 95. */
+function reportLighthouse(results: LighthouseResult[], budgets: { what: string; ok: boolean }[]) {
+  if (!results.length) return;
+  log("Lighthouse (phone, simulated throttling; the median of the runs): performance / accessibility / best practices");
+  for (const r of results) {
+    log(`  ${pad(r.name, 24)} ${pad(r.scores.performance, 3, true)} / ${pad(r.scores.accessibility, 3, true)} / ${pad(r.scores["best-practices"], 3, true)}   ${Object.entries(r.metrics).map(([k, v]) => `${k.replace(/-/g, " ")} ${v}`).join(", ")}${r.performanceRuns && r.performanceRuns.length > 1 ? `; performance of each run ${r.performanceRuns.join(", ")}` : ""}`);
+    for (const a of r.failing) log(`      ${a.category}: ${a.id} — ${a.title}${a.display ? ` (${a.display})` : ""}`);
+    budgets.push({ what: `Lighthouse ${r.name}: performance ≥ 95 (is ${r.scores.performance})`, ok: r.scores.performance >= 95 });
+    budgets.push({ what: `Lighthouse ${r.name}: accessibility = 100 (is ${r.scores.accessibility})`, ok: r.scores.accessibility === 100 });
+    budgets.push({ what: `Lighthouse ${r.name}: best practices ≥ 95 (is ${r.scores["best-practices"]})`, ok: r.scores["best-practices"] >= 95 });
+  }
 }
 
 function pad(s: string | number, n: number, left = false) {
@@ -427,6 +458,15 @@ async function main() {
       log(`EXPLAIN (${size}, ${dir}):`);
       for (const e of await explainAll(path.join(dir, size), fx)) log(`  ${pad(e.name, 44)} ${e.verdict}`);
     }
+    return;
+  }
+  if (LIGHTHOUSE_ONLY) {
+    if (!fs.existsSync(path.join(root, DIST, "BUILD_ID"))) run("npx", ["next", "build"], { NEXT_DIST_DIR: DIST, NEXT_TELEMETRY_DISABLED: "1" });
+    const budgets: { what: string; ok: boolean }[] = [];
+    const out = await benchSize("demo", Number(process.env.BENCH_PORT ?? 3390), THREADS[0] ?? "worker", true);
+    reportLighthouse(out.lighthouse, budgets);
+    for (const b of budgets) log(`${b.ok ? "pass       " : "FALL SHORT "} ${b.what}`);
+    log(`\n${budgets.filter((b) => b.ok).length} of ${budgets.length} budgets pass; total ${elapsed()}`);
     return;
   }
   if (process.env.BENCH_SKIP_CORE !== "1" && !QUICK) {
@@ -477,6 +517,7 @@ async function main() {
           if (size === "demo" && t === 0 && f.name !== "landing /") budgets.push({ what: `first-load JS of ${f.name} ≤ 170 KiB gzipped (is ${f.kib.toFixed(1)} KiB)`, ok: f.kib <= 170 });
         }
       }
+      reportLighthouse(out.lighthouse, budgets);
       if (out.explains.length) log("EXPLAIN:");
       for (const e of out.explains) {
         log(`  ${pad(e.name, 44)} ${e.verdict}`);

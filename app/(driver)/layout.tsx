@@ -2,7 +2,6 @@ import { redirect } from "next/navigation";
 import type { ReactNode } from "react";
 import { AppShell } from "@/components/shell/app-shell";
 import { getSession } from "@/lib/auth/session";
-import { DriverProviders } from "./providers";
 
 // Every account keeps its own vehicles: drivers, shop staff and operators alike keep
 // their own tires here. Only signed-out visitors are turned away.
@@ -22,7 +21,7 @@ export default async function DriverLayout({ children }: { children: ReactNode }
         { href: "/account", label: "Account" },
       ]}
     >
-      <DriverProviders>{children}</DriverProviders>
+      {children}
     </AppShell>
   );
 }

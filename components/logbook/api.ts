@@ -36,7 +36,6 @@ export async function api<T>(url: string, opts: { method?: string; body?: unknow
 }
 
 export const keys = {
-  overview: ["vehicles-overview"] as const,
   vehicle: (id: string) => ["vehicle", id] as const,
   set: (id: string) => ["set", id] as const,
 };

@@ -2,7 +2,6 @@
 // Recording a tread check: inner / centre / outer per tire in mm or 32nds,
 // or what a coin showed (saved as an approximate depth), with pressure and
 // odometer. A depth outside 0–20 mm is refused; a lower odometer asks first.
-import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
@@ -19,6 +18,7 @@ import { distanceToKm, type DepthUnit, type PressureUnit } from "@/lib/units";
 import { POSITION_LABELS, todayIso, type PositionValue } from "@/lib/validation/labels";
 import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 import { api, ApiError, keys } from "./api";
+import { useInvalidate } from "./use-invalidate";
 import { setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 
@@ -77,7 +77,7 @@ export function CheckForm({
 }) {
   const f = useFormat();
   const router = useRouter();
-  const queryClient = useQueryClient();
+  const invalidate = useInvalidate();
   const [error, setError] = useState<string | null>(null);
   const first = sets.find((s) => s.id === preselect) ?? sets.find((s) => s.state === "mounted") ?? sets[0];
   const form = useForm<Values>({
@@ -122,12 +122,7 @@ export function CheckForm({
           setError(null);
           try {
             await api(edit?.url ?? `/api/vehicles/${vehicle.id}/checks`, { method: edit ? "PATCH" : "POST", body: values });
-            await Promise.all([
-              queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicle.id) }),
-              queryClient.invalidateQueries({ queryKey: keys.set(values.setId) }),
-              ...(edit ? [queryClient.invalidateQueries({ queryKey: keys.set(edit.values.setId) })] : []),
-              queryClient.invalidateQueries({ queryKey: keys.overview }),
-            ]);
+            await invalidate(keys.vehicle(vehicle.id), keys.set(values.setId), ...(edit ? [keys.set(edit.values.setId)] : []));
             if (edit) {
               toast.success(`The tread check of ${f.date(values.checkedOn)} is changed.`);
               edit.onDone();

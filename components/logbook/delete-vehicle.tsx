@@ -1,17 +1,15 @@
 "use client";
 // Deleting a vehicle and everything logged for it, after a confirmation that says what goes.
-import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { toast } from "@/components/ui/toast";
 import { useFormat } from "@/components/format/format-provider";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
-import { api, keys } from "./api";
+import { api } from "./api";
 
 export function DeleteVehicle({ vehicleId, nickname, sets, entries, files }: { vehicleId: string; nickname: string; sets: number; entries: number; files: number }) {
   const router = useRouter();
-  const queryClient = useQueryClient();
   const f = useFormat();
   return (
     <Card className="space-y-3 border-condition-replace/30">
@@ -28,7 +26,6 @@ export function DeleteVehicle({ vehicleId, nickname, sets, entries, files }: { v
         confirmLabel="Delete the vehicle"
         onConfirm={async () => {
           await api(`/api/vehicles/${vehicleId}`, { method: "DELETE" });
-          await queryClient.invalidateQueries({ queryKey: keys.overview });
           toast.success(`${nickname} is deleted.`);
           router.push("/vehicles");
           router.refresh();

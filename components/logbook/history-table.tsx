@@ -1,21 +1,10 @@
 "use client";
 // The vehicle's history: tread checks and service entries in one table that
-// sorts, filters and pages (TanStack Table).
-import {
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getPaginationRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnDef,
-  type ColumnFiltersState,
-  type PaginationState,
-  type SortingState,
-} from "@tanstack/react-table";
+// sorts, filters and pages. Plain React state: a table library cost the
+// vehicle page ~13 KiB of first-load JS for these few operations.
 import { ArrowDown, ArrowUp, ArrowUpDown, Pencil, Trash2 } from "lucide-react";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
-import { useMemo, useState } from "react";
+import { useMemo, useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Input, Select } from "@/components/ui/field";
 import type { VehicleLogbook } from "@/db/queries/logbook";
@@ -68,15 +57,44 @@ export function historyRows(book: VehicleLogbook, depthUnit: DepthUnit, f: Forma
   return [...checks, ...service].sort((a, b) => b.date.localeCompare(a.date));
 }
 
-/**
- * Every input of `useReactTable` is kept referentially stable, and the page
- * index is ours, not the table's. The table recomputes its filtered rows when
- * the `columnFilters` array or `data` changes identity and then *resets the
- * page index* through a state update (autoResetPageIndex): a fresh array made
- * during render therefore re-renders, makes another array, resets again, and
- * the tab spins at full CPU. The React Compiler lint reports the hook as an
- * incompatible library, so nothing here may rely on the compiler memoising.
- */
+type SortKey = "date" | "type" | "setName" | "odometerKm" | "by";
+type Sort = { id: SortKey; desc: boolean };
+type Column = { id: keyof HistoryRow | "actions"; header: string; sortable: boolean };
+
+export const HISTORY_PAGE_SIZE = 8;
+
+const COLUMNS: Column[] = [
+  { id: "date", header: "Date", sortable: true },
+  { id: "type", header: "What", sortable: true },
+  { id: "setName", header: "Set", sortable: true },
+  { id: "odometerKm", header: "Odometer", sortable: true },
+  { id: "details", header: "Details", sortable: false },
+  { id: "by", header: "By", sortable: true },
+];
+
+const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: "base" });
+
+/** Rows that match the search (any column's text, as typed) and the type filter, in the chosen order. */
+export function visibleHistory(rows: HistoryRow[], { search, type, sort }: { search: string; type: string; sort: Sort }): HistoryRow[] {
+  const needle = search.toLowerCase();
+  const matches = rows.filter(
+    (r) =>
+      (!type || r.type === type) &&
+      (!needle || [r.date, r.type, r.setName, r.odometerKm, r.details, r.by].some((v) => v != null && String(v).toLowerCase().includes(needle))),
+  );
+  const dir = sort.desc ? -1 : 1;
+  // Array.prototype.sort is stable: equal rows keep the logbook's order (newest first).
+  return matches.sort((a, b) => {
+    const x = a[sort.id];
+    const y = b[sort.id];
+    if (x == null || y == null) return x == null ? (y == null ? 0 : 1) : -1; // no odometer: last either way
+    return dir * (typeof x === "number" && typeof y === "number" ? x - y : collator.compare(String(x), String(y)));
+  });
+}
+
+/** A header's first click: text columns start A→Z (dates oldest first), numbers largest first. */
+const firstDesc = (id: SortKey) => id === "odometerKm";
+
 export function HistoryTable({
   rows,
   distanceUnit,
@@ -87,92 +105,66 @@ export function HistoryTable({
   rows: HistoryRow[];
   distanceUnit: DistanceUnit;
   onDelete?: (row: HistoryRow) => Promise<void>;
-  /** Opens the row's edit form (kept stable by the caller, like onDelete). */
+  /** Opens the row's edit form. */
   onEdit?: (row: HistoryRow) => void;
   /** The pointer or focus reached a row's edit button: a chance to start loading the form's code. */
   onEditIntent?: () => void;
 }) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: "date", desc: true }]);
+  const [sort, setSort] = useState<Sort>({ id: "date", desc: true });
   const [typeFilter, setTypeFilter] = useState("");
   const [search, setSearch] = useState("");
+  const [page, setPage] = useState(0);
   const f = useFormat();
-  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 8 });
-  const columnFilters = useMemo<ColumnFiltersState>(() => (typeFilter ? [{ id: "type", value: typeFilter }] : []), [typeFilter]);
   const types = useMemo(() => [...new Set(rows.map((r) => r.type))].sort(), [rows]);
-  const columns = useMemo<ColumnDef<HistoryRow>[]>(
-    () => [
-      { accessorKey: "date", header: "Date", cell: (c) => <span className="whitespace-nowrap">{f.date(c.getValue<string>())}</span> },
-      { accessorKey: "type", header: "What", filterFn: (row, id, value) => !value || row.getValue(id) === value },
-      { accessorKey: "setName", header: "Set" },
-      {
-        accessorKey: "odometerKm",
-        header: "Odometer",
-        sortUndefined: "last",
-        cell: (c) => <span className="whitespace-nowrap">{f.distance(c.getValue<number | null>(), distanceUnit)}</span>,
-      },
-      { accessorKey: "details", header: "Details", enableSorting: false },
-      { accessorKey: "by", header: "By" },
-      ...(onDelete
-        ? [
-            {
-              id: "actions",
-              header: () => <span className="sr-only">Actions</span>,
-              enableSorting: false,
-              cell: (c) => {
-                const row = c.row.original;
-                return (
-                  <div className="flex flex-col md:flex-row">
-                  {onEdit ? (
-                    <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Change: ${row.type}, ${f.date(row.date)}`} onPointerEnter={onEditIntent} onFocus={onEditIntent} onClick={() => onEdit(row)}>
-                      <Pencil aria-hidden className="size-4" />
-                    </button>
-                  ) : null}
-                  <ConfirmDialog
-                    trigger={
-                      <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Delete: ${row.type}, ${f.date(row.date)}`}>
-                        <Trash2 aria-hidden className="size-4" />
-                      </button>
-                    }
-                    title={`Delete this ${row.type.toLowerCase()}?`}
-                    description={
-                      <p>
-                        {row.type} of {f.date(row.date)}
-                        {row.details ? ` (${row.details})` : ""} leaves the history
-                        {row.id.startsWith("c-") ? ", and its readings leave the wear chart and the projections" : "; tread checks taken with it stay as checks of their own, and its files are deleted"}. This cannot be undone.
-                      </p>
-                    }
-                    confirmLabel="Delete the entry"
-                    onConfirm={() => onDelete(row)}
-                  />
-                  </div>
-                );
-              },
-            } satisfies ColumnDef<HistoryRow>,
-          ]
-        : []),
-    ],
-    [distanceUnit, f, onDelete, onEdit, onEditIntent],
-  );
-  // eslint-disable-next-line react-hooks/incompatible-library -- the inputs are stable by hand (see above); the compiler is not enabled
-  const table = useReactTable({
-    data: rows,
-    columns,
-    state: { sorting, globalFilter: search, columnFilters, pagination },
-    onSortingChange: (u) => {
-      setSorting(u);
-      setPagination((p) => (p.pageIndex === 0 ? p : { ...p, pageIndex: 0 }));
-    },
-    onPaginationChange: setPagination,
-    autoResetPageIndex: false,
-    // A header click goes between ascending and descending; the history never sits unsorted.
-    enableSortingRemoval: false,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getPaginationRowModel: getPaginationRowModel(),
-    globalFilterFn: "includesString",
-  });
-  const shown = table.getFilteredRowModel().rows.length;
+  const visible = useMemo(() => visibleHistory(rows, { search, type: typeFilter, sort }), [rows, search, typeFilter, sort]);
+  const shown = visible.length;
+  const pageCount = Math.max(1, Math.ceil(shown / HISTORY_PAGE_SIZE));
+  // A delete can empty the last page: show the one before it.
+  const pageIndex = Math.min(page, pageCount - 1);
+  const pageRows = visible.slice(pageIndex * HISTORY_PAGE_SIZE, (pageIndex + 1) * HISTORY_PAGE_SIZE);
+  const columns: Column[] = onDelete ? [...COLUMNS, { id: "actions", header: "Actions", sortable: false }] : COLUMNS;
+  const sortBy = (id: SortKey) => {
+    setSort((s) => (s.id === id ? { id, desc: !s.desc } : { id, desc: firstDesc(id) }));
+    setPage(0);
+  };
+
+  const cell = (row: HistoryRow, id: Column["id"]): ReactNode => {
+    switch (id) {
+      case "date":
+        return <span className="whitespace-nowrap">{f.date(row.date)}</span>;
+      case "odometerKm":
+        return <span className="whitespace-nowrap">{f.distance(row.odometerKm, distanceUnit)}</span>;
+      case "actions":
+        return (
+          <div className="flex flex-col md:flex-row">
+            {onEdit ? (
+              <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Change: ${row.type}, ${f.date(row.date)}`} onPointerEnter={onEditIntent} onFocus={onEditIntent} onClick={() => onEdit(row)}>
+                <Pencil aria-hidden className="size-4" />
+              </button>
+            ) : null}
+            <ConfirmDialog
+              trigger={
+                <button type="button" className="inline-flex size-9 items-center justify-center rounded text-asphalt-700 hover:bg-asphalt-100" aria-label={`Delete: ${row.type}, ${f.date(row.date)}`}>
+                  <Trash2 aria-hidden className="size-4" />
+                </button>
+              }
+              title={`Delete this ${row.type.toLowerCase()}?`}
+              description={
+                <p>
+                  {row.type} of {f.date(row.date)}
+                  {row.details ? ` (${row.details})` : ""} leaves the history
+                  {row.id.startsWith("c-") ? ", and its readings leave the wear chart and the projections" : "; tread checks taken with it stay as checks of their own, and its files are deleted"}. This cannot be undone.
+                </p>
+              }
+              confirmLabel="Delete the entry"
+              onConfirm={() => onDelete!(row)}
+            />
+          </div>
+        );
+      default:
+        return row[id];
+    }
+  };
 
   const hideOnPhone = (id: string) => (id === "setName" || id === "odometerKm" || id === "by" ? "hidden md:table-cell" : "");
 
@@ -181,11 +173,11 @@ export function HistoryTable({
       <div className="grid gap-2 sm:grid-cols-[1fr_14rem]">
         <label className="block">
           <span className="text-sm font-semibold text-asphalt-800">Search the history</span>
-          <Input value={search} onChange={(e) => { setSearch(e.target.value); setPagination((p) => ({ ...p, pageIndex: 0 })); }} placeholder="Shop, set, notes…" />
+          <Input value={search} onChange={(e) => { setSearch(e.target.value); setPage(0); }} placeholder="Shop, set, notes…" />
         </label>
         <label className="block">
           <span className="text-sm font-semibold text-asphalt-800">Show</span>
-          <Select value={typeFilter} onChange={(e) => { setTypeFilter(e.target.value); setPagination((p) => ({ ...p, pageIndex: 0 })); }}>
+          <Select value={typeFilter} onChange={(e) => { setTypeFilter(e.target.value); setPage(0); }}>
             <option value="">Everything</option>
             {types.map((t) => (
               <option key={t} value={t}>
@@ -200,35 +192,35 @@ export function HistoryTable({
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Tread checks and service entries, {f.count(shown, { one: "row", other: "rows" })}</caption>
           <thead className="bg-asphalt-100 text-asphalt-800">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" className={`px-3 py-2 font-semibold ${hideOnPhone(h.column.id)}`} aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" className="inline-flex min-h-9 items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          {sorted === "asc" ? <ArrowUp aria-hidden className="size-3.5" /> : sorted === "desc" ? <ArrowDown aria-hidden className="size-3.5" /> : <ArrowUpDown aria-hidden className="size-3.5 text-asphalt-500" />}
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
+            <tr>
+              {columns.map((c) => {
+                const sorted = sort.id === c.id ? (sort.desc ? "desc" : "asc") : null;
+                return (
+                  <th key={c.id} scope="col" className={`px-3 py-2 font-semibold ${hideOnPhone(c.id)}`} aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
+                    {c.id === "actions" ? (
+                      <span className="sr-only">{c.header}</span>
+                    ) : c.sortable ? (
+                      <button type="button" className="inline-flex min-h-9 items-center gap-1" onClick={() => sortBy(c.id as SortKey)}>
+                        {c.header}
+                        {sorted === "asc" ? <ArrowUp aria-hidden className="size-3.5" /> : sorted === "desc" ? <ArrowDown aria-hidden className="size-3.5" /> : <ArrowUpDown aria-hidden className="size-3.5 text-asphalt-500" />}
+                      </button>
+                    ) : (
+                      c.header
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
           </thead>
           <tbody>
-            {table.getRowModel().rows.map((r) => (
+            {pageRows.map((r) => (
               <tr key={r.id} className="border-t border-asphalt-200 align-top" data-testid="history-row">
-                {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className={`px-3 py-2 ${hideOnPhone(c.column.id)}`}>
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                    {c.column.id === "details" ? (
+                {columns.map((c) => (
+                  <td key={c.id} className={`px-3 py-2 ${hideOnPhone(c.id)}`}>
+                    {cell(r, c.id)}
+                    {c.id === "details" ? (
                       <span className="mt-1 block text-asphalt-600 md:hidden">
-                        {[r.original.setName, r.original.odometerKm != null ? f.distance(r.original.odometerKm, distanceUnit) : null, r.original.by].filter(Boolean).join(" · ")}
+                        {[r.setName, r.odometerKm != null ? f.distance(r.odometerKm, distanceUnit) : null, r.by].filter(Boolean).join(" · ")}
                       </span>
                     ) : null}
                   </td>
@@ -247,13 +239,13 @@ export function HistoryTable({
       </div>
       <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
         <span aria-live="polite" data-testid="history-status">
-          Page {f.number(table.getState().pagination.pageIndex + 1)} of {f.number(Math.max(1, table.getPageCount()))} · {f.count(shown, { one: "entry", other: "entries" })}
+          Page {f.number(pageIndex + 1)} of {f.number(pageCount)} · {f.count(shown, { one: "entry", other: "entries" })}
         </span>
         <div className="flex gap-2">
-          <Button type="button" variant="secondary" size="sm" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+          <Button type="button" variant="secondary" size="sm" onClick={() => setPage(pageIndex - 1)} disabled={pageIndex === 0}>
             Previous page
           </Button>
-          <Button type="button" variant="secondary" size="sm" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+          <Button type="button" variant="secondary" size="sm" onClick={() => setPage(pageIndex + 1)} disabled={pageIndex >= pageCount - 1}>
             Next page
           </Button>
         </div>

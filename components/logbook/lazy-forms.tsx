@@ -1,6 +1,6 @@
 "use client";
 // The logbook's forms that open on request (a new service entry, the set's
-// settings, changing a saved check or entry, a tire's editor) load their code when opened:
+// settings, changing a saved check or entry, a tire's editor, a seasonal swap) load their code when opened:
 // with them come zod, react-hook-form and the schemas, which the page itself
 // does not need to be shown. Until a form is opened its button is drawn here,
 // the same as the form's own closed state; the code starts loading when the
@@ -15,10 +15,12 @@ import type { TireView } from "@/db/queries/logbook-view";
 import type { SetKind } from "@/lib/tires";
 import { POSITION_LABELS } from "@/lib/validation/labels";
 
+type Variant = "primary" | "secondary";
+
 /** The closed form's button as it looks while the form's code arrives. */
-function Opening({ label, className }: { label: string; className?: string }) {
+function Opening({ label, className, variant = "secondary" }: { label: string; className?: string; variant?: Variant }) {
   return (
-    <Button type="button" variant="secondary" size="sm" className={className} pending pendingLabel="Opening…">
+    <Button type="button" variant={variant} size="sm" className={className} pending pendingLabel="Opening…">
       {label}
     </Button>
   );
@@ -28,6 +30,7 @@ const loadServiceEntryForm = () => import("./service-entry-form");
 const loadSetSettings = () => import("./set-settings");
 const loadEditEntry = () => import("./edit-entry");
 const loadTireEditor = () => import("./tire-editor");
+const loadSwapForm = () => import("./swap-form");
 
 const ServiceEntryFormLazy = dynamic(() => import("./service-entry-form").then((m) => m.ServiceEntryForm), {
   ssr: false,
@@ -41,6 +44,10 @@ const TireEditorLazy = dynamic(() => import("./tire-editor").then((m) => m.TireE
   ssr: false,
   loading: () => <Opening label="Opening…" className="mt-2" />,
 });
+const SwapFormLazy = dynamic(() => import("./swap-form").then((m) => m.SwapForm), {
+  ssr: false,
+  loading: () => <Opening label="Put this set on the car" variant="primary" />,
+});
 export const EditCheck = dynamic(() => import("./edit-entry").then((m) => m.EditCheck), { ssr: false, loading: () => <FormLoading /> });
 export const EditServiceEntry = dynamic(() => import("./edit-entry").then((m) => m.EditServiceEntry), { ssr: false, loading: () => <FormLoading /> });
 
@@ -48,11 +55,11 @@ export const EditServiceEntry = dynamic(() => import("./edit-entry").then((m) =>
 export const preloadEditEntry = () => void loadEditEntry();
 
 /** A closed form's button; once pressed, the form (loaded on demand) takes its place, opened. */
-function OnDemand({ label, className, preload, children }: { label: ReactNode; className?: string; preload: () => unknown; children: () => ReactNode }) {
+function OnDemand({ label, className, variant = "secondary", preload, children }: { label: ReactNode; className?: string; variant?: Variant; preload: () => unknown; children: () => ReactNode }) {
   const [open, setOpen] = useState(false);
   if (open) return children();
   return (
-    <Button type="button" variant="secondary" size="sm" className={className} onPointerEnter={() => void preload()} onFocus={() => void preload()} onClick={() => setOpen(true)}>
+    <Button type="button" variant={variant} size="sm" className={className} onPointerEnter={() => void preload()} onFocus={() => void preload()} onClick={() => setOpen(true)}>
       {label}
     </Button>
   );
@@ -92,6 +99,15 @@ export function SetSettings(props: { set: SetView; vehicleId: string }) {
   return (
     <OnDemand label="Change the set's name or limits" preload={loadSetSettings}>
       {() => <SetSettingsLazy {...props} startOpen />}
+    </OnDemand>
+  );
+}
+
+/** "Put this set on the car" on a stored set's card. */
+export function SwapControl(props: { set: SetView; vehicleId: string; mounted: SetView | null }) {
+  return (
+    <OnDemand label="Put this set on the car" variant="primary" preload={loadSwapForm}>
+      {() => <SwapFormLazy {...props} startOpen />}
     </OnDemand>
   );
 }

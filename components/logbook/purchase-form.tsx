@@ -3,7 +3,6 @@
 // typed stays in the form whatever the server answers; the set, its tires,
 // the old set's fate and the fitting entry are saved in one request (one
 // transaction), then the receipt and photos upload with a progress bar.
-import { useQueryClient } from "@tanstack/react-query";
 import { Paperclip, Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
@@ -25,11 +24,11 @@ import {
   type PositionValue,
 } from "@/lib/validation/labels";
 import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
-import { api, ApiError, keys } from "./api";
+import { api, ApiError } from "./api";
 import { uploadFile } from "./upload";
 import { setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
-import { DotPreview, SizePreview } from "./live-decode";
+import { DotPreview, SizePreview, preloadLiveDecode } from "./live-decode";
 
 const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.setPurchaseSchema));
 
@@ -80,7 +79,6 @@ type Upload = { file: File; kind: "receipt" | "photo"; progress: number; error?:
 export function PurchaseForm({ vehicles, units, preselect }: { vehicles: VehicleChoice[]; units: UnitSystem; preselect?: string }) {
   const f = useFormat();
   const router = useRouter();
-  const queryClient = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
   const [uploads, setUploads] = useState<Upload[]>([]);
   const [phase, setPhase] = useState<"editing" | "saving" | "uploading">("editing");
@@ -253,8 +251,6 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
           setSavedSetId(setId);
         }
         const ok = await uploadAll(vid, setId);
-        await queryClient.invalidateQueries({ queryKey: keys.overview });
-        await queryClient.invalidateQueries({ queryKey: keys.vehicle(vid) });
         if (!ok) {
           setFormError("The set is saved. Some files could not be uploaded: remove them or choose them again, then press the button once more.");
           return setPhase("editing");
@@ -331,7 +327,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
         <Field label="Tire size" error={err("size")}>
           {({ id, describedBy, invalid }) => (
             <>
-              <Input id={id} aria-describedby={`${describedBy ?? ""} size-preview`.trim()} aria-invalid={invalid} autoCapitalize="characters" autoComplete="off" spellCheck={false} placeholder="205/55 R16 91V" {...register("size")} />
+              <Input id={id} aria-describedby={`${describedBy ?? ""} size-preview`.trim()} aria-invalid={invalid} autoCapitalize="characters" autoComplete="off" spellCheck={false} placeholder="205/55 R16 91V" onFocus={preloadLiveDecode} {...register("size")} />
               <SizePreview id="size-preview" size={w.size} placard={isNew ? w.newPlacard || null : chosen?.placardFrontSize} winter={kind === "winter"} />
             </>
           )}
@@ -386,6 +382,7 @@ export function PurchaseForm({ vehicles, units, preselect }: { vehicles: Vehicle
                         id={id}
                         aria-describedby={`${describedBy ?? ""} dot-${i}`.trim()}
                         aria-invalid={invalid}
+                        onFocus={preloadLiveDecode}
                         autoCapitalize="characters"
                         autoComplete="off"
                         spellCheck={false}

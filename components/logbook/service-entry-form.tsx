@@ -45,7 +45,7 @@ export function ServiceEntryForm({
   const save = useMutation({
     mutationFn: (v: unknown) => api(edit?.url ?? `/api/vehicles/${vehicleId}/service-entries`, { method: edit ? "PATCH" : "POST", body: v }),
     onSuccess: async (_data, v) => {
-      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
+      await queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) });
       if (edit) {
         const values = v as Values;
         toast.success(`${SERVICE_KIND_LABELS[values.kind]} of ${f.date(values.performedOn || edit.values.performedOn)} is changed.`);

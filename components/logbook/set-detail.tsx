@@ -1,9 +1,9 @@
 "use client";
 // One set: each tire's age, depth, wear pattern and projection, the wear
 // chart, the readings table and the set's own limits.
-import dynamic from "next/dynamic";
 import type { SetKind } from "@/lib/tires";
 import { useQuery } from "@tanstack/react-query";
+import { QueryIsland } from "./query-island";
 import Link from "next/link";
 import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -22,14 +22,17 @@ import { useFormat } from "@/components/format/format-provider";
 // The forms that open on request load their code (and zod, react-hook-form) when opened.
 import { EditCheck, SetSettings, preloadEditEntry } from "./lazy-forms";
 import { TireList } from "./tire-list";
-// The chart library is most of this page's JavaScript: it loads after the
-// page is shown, into a box of the chart's own height (no layout shift).
-const WearChart = dynamic(() => import("./wear-chart").then((m) => m.WearChart), {
-  ssr: false,
-  loading: () => <div className="h-[22.5rem] w-full animate-pulse rounded bg-asphalt-50 sm:h-[26.5rem]" aria-label="Loading the wear chart" role="status" />,
-});
+import { WearChart } from "./wear-chart";
 
-export function SetDetailView({ initial, saved }: { initial: SetDetail; saved?: string }) {
+export function SetDetailView(props: { initial: SetDetail; saved?: string }) {
+  return (
+    <QueryIsland>
+      <SetDetailBody {...props} />
+    </QueryIsland>
+  );
+}
+
+function SetDetailBody({ initial, saved }: { initial: SetDetail; saved?: string }) {
   const f = useFormat();
   const { data } = useQuery({ queryKey: keys.set(initial.set.id), queryFn: () => api<SetDetail>(`/api/sets/${initial.set.id}`), initialData: initial });
   const d = data ?? initial;

@@ -41,7 +41,6 @@ export function SetSettings({ set, vehicleId, startOpen = false }: { set: SetVie
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: keys.set(set.id) }),
         queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }),
-        queryClient.invalidateQueries({ queryKey: keys.overview }),
       ]);
     },
     onError: (e) => {

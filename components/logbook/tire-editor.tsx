@@ -32,7 +32,6 @@ export function TireEditor({ tire, edit, startOpen = false }: { tire: TireView; 
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: keys.vehicle(edit.vehicleId) }),
         queryClient.invalidateQueries({ queryKey: keys.set(edit.setId) }),
-        queryClient.invalidateQueries({ queryKey: keys.overview }),
       ]);
     },
   });
@@ -98,7 +97,6 @@ export function TireEditor({ tire, edit, startOpen = false }: { tire: TireView; 
             await Promise.all([
               queryClient.invalidateQueries({ queryKey: keys.vehicle(edit.vehicleId) }),
               queryClient.invalidateQueries({ queryKey: keys.set(edit.setId) }),
-              queryClient.invalidateQueries({ queryKey: keys.overview }),
             ]);
           }}
         />

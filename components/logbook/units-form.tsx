@@ -1,5 +1,4 @@
 "use client";
-import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm, type Resolver } from "react-hook-form";
 import { Alert } from "@/components/ui/alert";
@@ -11,7 +10,6 @@ import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
 const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.unitsSchema));
 
 export function UnitsForm({ initial, save }: { initial: UnitsInput; save: (v: UnitsInput) => Promise<ActionResult<UnitsInput>> }) {
-  const queryClient = useQueryClient();
   const [result, setResult] = useState<ActionResult<UnitsInput> | null>(null);
   const form = useForm<UnitsInput>({ resolver: resolver as unknown as Resolver<UnitsInput>, defaultValues: initial });
   const { register, formState } = form;
@@ -22,8 +20,6 @@ export function UnitsForm({ initial, save }: { initial: UnitsInput; save: (v: Un
       onSubmit={form.handleSubmit(async (v) => {
         const r = await save(v);
         setResult(r);
-        // Every cached logbook shows depths and distances in these units.
-        if (r.status === "ok") await queryClient.invalidateQueries();
       })}
     >
       {result?.status === "ok" ? <Alert tone="success">Saved. Depths, distances and pressures now show in these units.</Alert> : null}

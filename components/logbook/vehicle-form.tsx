@@ -1,6 +1,5 @@
 "use client";
 // Adding (or changing) a vehicle: the same zod schema as the API.
-import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
@@ -11,8 +10,8 @@ import { Field, Input, Select } from "@/components/ui/field";
 import { validateVin } from "@/lib/tires/vin";
 import type { PressureUnit } from "@/lib/units";
 import { lazyZodResolver } from "@/lib/forms/lazy-zod-resolver";
-import { api, ApiError, keys } from "./api";
-import { SizePreview } from "./live-decode";
+import { api, ApiError } from "./api";
+import { SizePreview, preloadLiveDecode } from "./live-decode";
 
 const resolver = lazyZodResolver(() => import("@/lib/validation/logbook").then((m) => m.vehicleSchema));
 
@@ -46,7 +45,6 @@ export function VehicleForm({
   existing?: { id: string; values: Partial<Values> };
 }) {
   const router = useRouter();
-  const queryClient = useQueryClient();
   const [error, setError] = useState<string | null>(null);
   const form = useForm<Values>({
     resolver: resolver as unknown as Resolver<Values>,
@@ -58,9 +56,9 @@ export function VehicleForm({
   const e = (k: keyof Values) => formState.errors[k]?.message;
   const vinCheck = w.vin && w.vin.trim().length === 17 ? validateVin(w.vin) : null;
 
-  const text = (name: keyof Values, label: string, opts: { hint?: string; inputMode?: "numeric" | "decimal"; autoComplete?: string } = {}) => (
+  const text = (name: keyof Values, label: string, opts: { hint?: string; inputMode?: "numeric" | "decimal"; autoComplete?: string; onFocus?: () => void } = {}) => (
     <Field label={label} hint={opts.hint} error={e(name)}>
-      {({ id, describedBy, invalid }) => <Input id={id} aria-describedby={describedBy} aria-invalid={invalid} inputMode={opts.inputMode} autoComplete={opts.autoComplete ?? "off"} {...register(name)} />}
+      {({ id, describedBy, invalid }) => <Input id={id} aria-describedby={describedBy} aria-invalid={invalid} inputMode={opts.inputMode} autoComplete={opts.autoComplete ?? "off"} onFocus={opts.onFocus} {...register(name)} />}
     </Field>
   );
 
@@ -73,13 +71,11 @@ export function VehicleForm({
         try {
           if (existing) {
             await api(`/api/vehicles/${existing.id}`, { method: "PATCH", body: values });
-            await Promise.all([queryClient.invalidateQueries({ queryKey: keys.overview }), queryClient.invalidateQueries({ queryKey: keys.vehicle(existing.id) })]);
             router.push(`/vehicles/${existing.id}?saved=vehicle`);
             router.refresh();
             return;
           }
           const res = await api<{ vehicle: { id: string } }>("/api/vehicles", { body: values });
-          await queryClient.invalidateQueries({ queryKey: keys.overview });
           router.push(then === "log-purchase" ? `/log-purchase?vehicle=${res.vehicle.id}` : `/vehicles/${res.vehicle.id}`);
           router.refresh();
         } catch (err) {
@@ -104,7 +100,7 @@ export function VehicleForm({
       </Card>
       <Card className="grid gap-3 sm:grid-cols-2">
         <div>
-          {text("placardFrontSize", "Placard tire size, front", { hint: "On the sticker in the driver's door frame." })}
+          {text("placardFrontSize", "Placard tire size, front", { hint: "On the sticker in the driver's door frame.", onFocus: preloadLiveDecode })}
           {w.placardFrontSize ? <SizePreview size={w.placardFrontSize} placard={undefined} winter={false} /> : null}
         </div>
         {text("placardRearSize", "Placard tire size, rear (if different)")}

@@ -1,10 +1,10 @@
 "use client";
 // One vehicle's logbook: its sets (with the seasonal swap), files, history
 // and the shops' access log. Data through TanStack Query, seeded by the server.
-import { FormActions } from "@/components/ui/form-actions";
 import { AccessLogTable } from "@/components/passes/access-log-table";
 import { VehicleSharing } from "@/components/household/vehicle-sharing";
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { QueryIsland } from "./query-island";
 import { FileText, Image as ImageIcon } from "lucide-react";
 import Link from "next/link";
 import { useCallback, useMemo, useRef, useState } from "react";
@@ -15,19 +15,18 @@ import { Button } from "@/components/ui/button";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { Card } from "@/components/ui/card";
 import { ConditionBadge } from "@/components/ui/condition-badge";
-import { Field, Input } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyNote } from "@/components/ui/safety-note";
 import type { SetView, VehicleLogbook } from "@/db/queries/logbook";
 import { depthUnitFor } from "@/lib/units";
 import type { SetKind } from "@/lib/tires";
-import { SET_KIND_LABELS, todayIso } from "@/lib/validation/labels";
-import { api, ApiError, keys } from "./api";
+import { SET_KIND_LABELS } from "@/lib/validation/labels";
+import { api, keys } from "./api";
 import { linkClass, setTitle } from "./format";
 import { useFormat } from "@/components/format/format-provider";
 import { HistoryTable, historyRows, type HistoryRow } from "./history-table";
 // The forms that open on request load their code (and zod, react-hook-form) when opened.
-import { EditCheck, EditServiceEntry, NewServiceEntry, preloadEditEntry } from "./lazy-forms";
+import { EditCheck, EditServiceEntry, NewServiceEntry, SwapControl, preloadEditEntry } from "./lazy-forms";
 import { TireList } from "./tire-list";
 import { useOlderHistory } from "./use-older-history";
 
@@ -49,7 +48,15 @@ function OlderHistory({ book }: { book: VehicleLogbook }) {
  * `queryUrl` and `canManage` let a shop's page show the same logbook under a
  * pass: read from its own route, without the owner's purchase and swap actions.
  */
-export function VehicleLogbookView({
+export function VehicleLogbookView(props: Parameters<typeof Logbook>[0]) {
+  return (
+    <QueryIsland>
+      <Logbook {...props} />
+    </QueryIsland>
+  );
+}
+
+function Logbook({
   initial,
   saved,
   queryUrl,
@@ -68,7 +75,7 @@ export function VehicleLogbookView({
   const depthUnit = depthUnitFor(book.viewer.units);
   const distanceUnit = v.odometerUnit;
   const mounted = book.sets.find((s) => s.state === "mounted") ?? null;
-  // The table needs the same array until the logbook itself changes (see HistoryTable).
+  // Rows are worked out again only when the logbook itself changes.
   const rows = useMemo(() => historyRows(book, depthUnit, f), [book, depthUnit, f]);
   const queryClient = useQueryClient();
   const deleteEntry = useCallback(
@@ -77,7 +84,7 @@ export function VehicleLogbookView({
       const entryId = rest.join("-");
       await api(kind === "c" ? `/api/checks/${entryId}` : `/api/service-entries/${entryId}`, { method: "DELETE" });
       toast.success(`${row.type} of ${f.date(row.date)} deleted.`);
-      await Promise.all([queryClient.invalidateQueries({ queryKey: keys.vehicle(id) }), queryClient.invalidateQueries({ queryKey: keys.overview })]);
+      await queryClient.invalidateQueries({ queryKey: keys.vehicle(id) });
     },
     [f, id, queryClient],
   );
@@ -247,69 +254,6 @@ function SetCard({
         {canManage && set.state === "stored" ? <SwapControl set={set} vehicleId={vehicleId} mounted={mounted} /> : null}
       </div>
     </Card>
-  );
-}
-
-function SwapControl({ set, vehicleId, mounted }: { set: SetView; vehicleId: string; mounted: SetView | null }) {
-  const queryClient = useQueryClient();
-  const [open, setOpen] = useState(false);
-  const [storage, setStorage] = useState(set.storageLocation ?? "");
-  const [date, setDate] = useState(todayIso());
-  const [odometer, setOdometer] = useState("");
-  const [confirmLower, setConfirmLower] = useState(false);
-  const [storageError, setStorageError] = useState<string | null>(null);
-  const swap = useMutation({
-    mutationFn: () => api(`/api/vehicles/${vehicleId}/swap`, { body: { setId: set.id, storageLocation: storage, date, odometer, confirmLowerOdometer: confirmLower } }),
-    onSuccess: async () => {
-      setOpen(false);
-      await Promise.all([
-        queryClient.invalidateQueries({ queryKey: keys.vehicle(vehicleId) }),
-        queryClient.invalidateQueries({ queryKey: keys.overview }),
-      ]);
-    },
-  });
-  const err = swap.error instanceof ApiError ? swap.error : null;
-  if (!open) {
-    return (
-      <Button type="button" size="sm" onClick={() => setOpen(true)}>
-        Put this set on the car
-      </Button>
-    );
-  }
-  return (
-    <form
-      className="w-full space-y-3 rounded border border-groove-200 bg-groove-50 p-3"
-      onSubmit={(e) => {
-        e.preventDefault();
-        // The set coming off needs a place: said here, before the server is asked.
-        if (!storage.trim()) {
-          setStorageError(mounted ? `Say where ${setTitle(mounted)} will be kept.` : "Say where the set coming off is kept.");
-          return;
-        }
-        setStorageError(null);
-        swap.mutate();
-      }}
-    >
-      <p className="font-semibold">Seasonal swap: {setTitle(set)} goes on the car{mounted ? `, ${setTitle(mounted)} comes off` : ""}.</p>
-      {err ? <Alert tone="error">{err.message}</Alert> : null}
-      <div className="grid gap-3 sm:grid-cols-3">
-        <Field label={mounted ? `Where ${setTitle(mounted)} will be kept` : "Where the set coming off is kept"} error={storageError ?? err?.fields.storageLocation}>
-          {({ id, describedBy, invalid }) => <Input id={id} aria-describedby={describedBy} aria-invalid={invalid} value={storage} onChange={(e) => setStorage(e.target.value)} />}
-        </Field>
-        <Field label="Date" error={err?.fields.date}>
-          {({ id, describedBy, invalid }) => <Input id={id} type="date" max={todayIso()} aria-describedby={describedBy} aria-invalid={invalid} value={date} onChange={(e) => setDate(e.target.value)} />}
-        </Field>
-        <Field label="Odometer (optional)" error={err?.fields.odometer}>
-          {({ id, describedBy, invalid }) => <Input id={id} inputMode="numeric" aria-describedby={describedBy} aria-invalid={invalid} value={odometer} onChange={(e) => setOdometer(e.target.value)} />}
-        </Field>
-      </div>
-      {err?.code === "conflict" && err.fields.odometer ? (
-        <label className="flex min-h-11 items-center gap-2">
-          <input type="checkbox" className="size-5" checked={confirmLower} onChange={(e) => setConfirmLower(e.target.checked)} /> The lower reading is right
-        </label>
-      ) : null}
-      <FormActions pending={swap.isPending} submitLabel="Save the swap" pendingLabel="Swapping…" onCancel={() => setOpen(false)} />
-    </form>
   );
 }
 

@@ -79,6 +79,6 @@ export class LogbookPages {
 
   /** The markers the chart draws for measured readings (projections have none). */
   chartMarkers() {
-    return this.page.getByTestId("wear-chart").locator(".recharts-line-dots > *");
+    return this.page.getByTestId("wear-chart").locator("[data-marker]");
   }
 }
