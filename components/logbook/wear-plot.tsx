@@ -5,9 +5,13 @@
 // hatched in the condition palette (labelled with the limit), the "Plan" and
 // "Watch" bands above it, and each tire's projection to the limit dashed.
 // Each tire has its own colour *and* marker shape; a marker's title gives its
-// reading. A chart library drew this before: ~110 KiB of script and a quarter
+// reading. d3's scales choose the ticks and map values to the drawing, d3's
+// shapes draw the lines and markers, and React draws the SVG with the page: a
+// chart library that renders for itself cost ~110 KiB of script and a quarter
 // of a second of a phone's main thread, for a few lines.
 import { useEffect, useRef, useState } from "react";
+import { scaleLinear, scaleUtc } from "d3-scale";
+import { line, symbol, symbolCircle, symbolCross, symbolDiamond, symbolSquare, symbolTriangle } from "d3-shape";
 import type { TireView } from "@/db/queries/logbook-view";
 import { kmToDistance, mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
 import { POSITION_LABELS } from "@/lib/validation/labels";
@@ -32,13 +36,10 @@ const day = (iso: string) => Date.UTC(Number(iso.slice(0, 4)), Number(iso.slice(
 const isoOf = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 
 type Shape = (typeof LOOK)[number]["shape"];
+const SYMBOLS = { circle: symbolCircle, square: symbolSquare, triangle: symbolTriangle, diamond: symbolDiamond, cross: symbolCross } as const;
+const markerPath = Object.fromEntries(Object.entries(SYMBOLS).map(([k, type]) => [k, symbol(type, 72)() ?? ""])) as Record<Shape, string>;
 function Marker({ cx, cy, stroke, shape }: { cx: number; cy: number; stroke: string; shape: Shape }) {
-  const s = 4.5;
-  if (shape === "square") return <rect x={cx - s} y={cy - s} width={s * 2} height={s * 2} fill={stroke} />;
-  if (shape === "triangle") return <polygon points={`${cx},${cy - s - 1} ${cx - s - 1},${cy + s} ${cx + s + 1},${cy + s}`} fill={stroke} />;
-  if (shape === "diamond") return <polygon points={`${cx},${cy - s - 1} ${cx + s + 1},${cy} ${cx},${cy + s + 1} ${cx - s - 1},${cy}`} fill={stroke} />;
-  if (shape === "cross") return <path d={`M${cx - s},${cy - s}L${cx + s},${cy + s}M${cx + s},${cy - s}L${cx - s},${cy + s}`} stroke={stroke} strokeWidth={2.5} />;
-  return <circle cx={cx} cy={cy} r={s} fill={stroke} />;
+  return <path d={markerPath[shape]} transform={`translate(${cx},${cy})`} fill={stroke} />;
 }
 
 export function WearPlot({ tires, limitMm, depthUnit, distanceUnit, axis }: { tires: TireView[]; limitMm: number; depthUnit: DepthUnit; distanceUnit: DistanceUnit; axis: ChartAxis }) {
@@ -71,14 +72,15 @@ export function WearPlot({ tires, limitMm, depthUnit, distanceUnit, axis }: { ti
   const span = Math.max(lastX - firstX, axis === "date" ? 90 * 86_400_000 : 3_000);
   const xMax = ends.length ? Math.max(lastX, Math.min(Math.max(...ends), Math.min(...ends) + span * 0.5)) : lastX;
   const unitLabel = depthUnit === "32nds" ? "32nds in" : "mm";
-  const tickFormat = (v: number) => (axis === "date" ? f.monthYear(isoOf(v)) : `${Math.round(v / 1000)}k ${distanceUnit}`);
+  const tickFormat = (v: number) => (axis === "date" ? f.monthYear(isoOf(v)) : `${f.number(v / 1000, 1)}k ${distanceUnit}`);
   const xFormat = (v: number) => (axis === "date" ? f.date(isoOf(v)) : `${f.number(v)} ${distanceUnit}`);
   const limit = y(limitMm);
   const top = Math.max(...lines.flatMap((l) => l.points.map((p) => p.y)), y(limitMm + DEPTH_WATCH_MARGIN_MM));
-  const step = niceStep(top);
-  const yMax = Math.ceil(top / step) * step;
-  const yTicks = Array.from({ length: Math.round(yMax / step) + 1 }, (_, i) => Math.round(i * step * 100) / 100);
-  const scene = { lines, firstX, xMax, yMax, yTicks, limit, watch: y(limitMm + DEPTH_WATCH_MARGIN_MM), plan: y(limitMm + DEPTH_PLAN_MARGIN_MM), unitLabel, tickFormat, xFormat };
+  // Four to eight round ticks from zero to just above the deepest reading.
+  const depth = scaleLinear().domain([0, top]).nice(6);
+  const yMax = depth.domain()[1];
+  const yTicks = depth.ticks(6);
+  const scene = { axis, lines, firstX, xMax, yMax, yTicks, limit, watch: y(limitMm + DEPTH_WATCH_MARGIN_MM), plan: y(limitMm + DEPTH_PLAN_MARGIN_MM), unitLabel, tickFormat, xFormat };
 
   return <MeasuredPlot scene={scene} />;
 }
@@ -110,13 +112,8 @@ function MeasuredPlot({ scene }: { scene: Scene }) {
   );
 }
 
-/** A step of 1, 2, 5, 10 … that gives the depth axis four to eight ticks. */
-function niceStep(top: number): number {
-  for (const s of [0.5, 1, 2, 4, 5, 10, 20]) if (top / s <= 8) return s;
-  return 50;
-}
-
 type Scene = {
+  axis: ChartAxis;
   lines: { tire: TireView; points: { x: number; y: number }[]; projection: { x: number; y: number }[]; look: (typeof LOOK)[number]; name: string }[];
   firstX: number;
   xMax: number;
@@ -134,18 +131,27 @@ const GRID = asphalt[200];
 const INK = asphalt[700];
 
 function Plot({ scene, width, height, className }: { scene: Scene; width: number; height: number; className: string }) {
-  const { lines, firstX, xMax, yMax, yTicks, limit, watch, plan, unitLabel, tickFormat, xFormat } = scene;
+  const { axis, lines, firstX, xMax, yMax, yTicks, limit, watch, plan, unitLabel, tickFormat, xFormat } = scene;
   const left = 40;
   const right = width - 36;
   const top = 10;
   const bottom = height - 50; // the x labels, then the legend
-  // Evenly spaced ticks, so labels never pile up where several projections end; three on a phone.
-  const parts = right - left >= 400 ? 4 : 2;
-  const ticks = xMax > firstX ? Array.from({ length: parts + 1 }, (_, i) => Math.round(firstX + ((xMax - firstX) * i) / parts)) : [firstX];
-  const sx = (v: number) => (xMax > firstX ? left + ((v - firstX) / (xMax - firstX)) * (right - left) : (left + right) / 2);
-  const sy = (v: number) => bottom - (Math.min(Math.max(v, 0), yMax) / yMax) * (bottom - top);
+  // A single reading still gets an axis: a day (or a few hundred km) either side.
+  const pad = xMax > firstX ? 0 : axis === "date" ? 86_400_000 : 500;
+  const dates = scaleUtc().domain([firstX - pad, xMax + pad]).range([left, right]);
+  const distances = scaleLinear().domain([firstX - pad, xMax + pad]).range([left, right]);
+  const sx = (v: number) => (axis === "date" ? dates(v) : distances(v));
+  const yScale = scaleLinear().domain([0, yMax]).range([bottom, top]).clamp(true);
+  const sy = (v: number) => yScale(v);
+  // Few round ticks, so labels never pile up where several projections end; two or three on a phone.
+  const count = right - left >= 400 ? 5 : 2;
+  const ticks = (axis === "date" ? dates.ticks(count).map(Number) : distances.ticks(count)).filter((t) => t >= firstX - pad && t <= xMax + pad);
+  const anchor = (t: number) => (sx(t) - left < 36 ? "start" : right - sx(t) < 36 ? "end" : "middle");
   const clip = `wear-clip-${width}`;
-  const path = (pts: { x: number; y: number }[]) => pts.map((p, i) => `${i ? "L" : "M"}${sx(p.x).toFixed(1)},${sy(p.y).toFixed(1)}`).join("");
+  const draw = line<{ x: number; y: number }>()
+    .x((p) => sx(p.x))
+    .y((p) => sy(p.y));
+  const path = (pts: { x: number; y: number }[]) => draw(pts) ?? "";
   const band = (from: number, to: number) => ({ x: left, y: sy(to), width: right - left, height: Math.max(0, sy(from) - sy(to)) });
   const legendGap = (width - 20) / Math.max(1, lines.length);
   return (
@@ -163,10 +169,10 @@ function Plot({ scene, width, height, className }: { scene: Scene; width: number
           </text>
         </g>
       ))}
-      {ticks.map((t, i) => (
+      {ticks.map((t) => (
         <g key={`x${t}`}>
           <line x1={sx(t)} x2={sx(t)} y1={top} y2={bottom} stroke={GRID} strokeDasharray="3 3" />
-          <text x={sx(t)} y={bottom + 16} textAnchor={i === 0 ? "start" : i === ticks.length - 1 ? "end" : "middle"} fill={INK}>
+          <text x={sx(t)} y={bottom + 16} textAnchor={anchor(t)} fill={INK}>
             {tickFormat(t)}
           </text>
         </g>
