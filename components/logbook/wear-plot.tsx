@@ -144,8 +144,10 @@ function Plot({ scene, width, height, className }: { scene: Scene; width: number
   const yScale = scaleLinear().domain([0, yMax]).range([bottom, top]).clamp(true);
   const sy = (v: number) => yScale(v);
   // Few round ticks, so labels never pile up where several projections end; two or three on a phone.
-  const count = right - left >= 400 ? 5 : 2;
-  const ticks = (axis === "date" ? dates.ticks(count).map(Number) : distances.ticks(count)).filter((t) => t >= firstX - pad && t <= xMax + pad);
+  const count = right - left >= 400 ? 6 : 4;
+  let ticks = (axis === "date" ? dates.ticks(count).map(Number) : distances.ticks(count)).filter((t) => t >= firstX - pad && t <= xMax + pad);
+  // A label takes about 64 px: every other tick goes until they fit.
+  while (ticks.length > 2 && ticks.length * 64 > right - left) ticks = ticks.filter((_, i) => i % 2 === 0);
   const anchor = (t: number) => (sx(t) - left < 36 ? "start" : right - sx(t) < 36 ? "end" : "middle");
   const clip = `wear-clip-${width}`;
   const draw = line<{ x: number; y: number }>()
