@@ -127,6 +127,17 @@ type Scene = {
   xFormat: (v: number) => string;
 };
 
+/**
+ * A marker per reading while they can be told apart; a long history (weekly
+ * checks over years) keeps its line and marks only every n-th reading and
+ * the last, so a phone does not draw thousands of shapes.
+ */
+const MAX_MARKERS = 60;
+function markersOf(points: { x: number; y: number }[]) {
+  const every = Math.ceil(points.length / MAX_MARKERS);
+  return points.map((p, i) => ({ p, i })).filter(({ i }) => i % every === 0 || i === points.length - 1);
+}
+
 const GRID = asphalt[200];
 const INK = asphalt[700];
 
@@ -200,7 +211,7 @@ function Plot({ scene, width, height, className }: { scene: Scene; width: number
         {lines.map((l) => (
           <g key={l.tire.id}>
             <path d={path(l.points)} fill="none" stroke={l.look.stroke} strokeWidth={2} />
-            {l.points.map((p, i) => (
+            {markersOf(l.points).map(({ p, i }) => (
               <g key={i} data-marker>
                 <title>{`${l.name}: ${p.y} ${unitLabel}, ${xFormat(p.x)}`}</title>
                 <Marker cx={sx(p.x)} cy={sy(p.y)} stroke={l.look.stroke} shape={l.look.shape} />
