@@ -1,12 +1,20 @@
 "use client";
-// The set page's wear chart: the caption, the axis switch, the plot
-// (wear-plot.tsx, plain SVG) and the key of the limit zone, all in the page's
-// HTML. The same facts are in the table under the chart.
+// The set page's wear chart: the caption, the axis switch and the key of the
+// limit zone in the page's HTML; the plot (wear-plot.tsx, SVG with d3's
+// scales and shapes) loads after the page, in a box of its final size, so it
+// adds nothing to the page's first load. The same facts are in the table
+// under the chart.
 import { useState } from "react";
+import dynamic from "next/dynamic";
 import type { TireView } from "@/db/queries/logbook-view";
 import { mmToDepth, type DepthUnit, type DistanceUnit } from "@/lib/units";
 import { limitZone } from "@/lib/visual/tokens";
-import { HATCH_ID, WearPlot, type ChartAxis } from "./wear-plot";
+import { HATCH_ID, type ChartAxis } from "./wear-ids";
+
+const WearPlot = dynamic(() => import("./wear-plot").then((m) => m.WearPlot), {
+  ssr: false,
+  loading: () => <div className="flex h-full w-full items-center justify-center text-sm text-asphalt-600">Drawing the chart…</div>,
+});
 
 
 

@@ -19,9 +19,7 @@ import { DEPTH_PLAN_MARGIN_MM, DEPTH_WATCH_MARGIN_MM } from "@/lib/tires/depth";
 import { asphalt, condition, limitZone } from "@/lib/visual/tokens";
 import { useFormat } from "@/components/format/format-provider";
 
-export type ChartAxis = "date" | "odometer";
-/** The hatch pattern of the limit zone, defined once by wear-chart.tsx for the plot and the key. */
-export const HATCH_ID = "fourpatch-limit-hatch";
+import { HATCH_ID, type ChartAxis } from "./wear-ids";
 
 // Each tire's own colour and marker: identities, not conditions, so none of them is a condition colour.
 const LOOK = [
