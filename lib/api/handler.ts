@@ -10,6 +10,7 @@ import "server-only";
 // parseJson() then reads the body with a byte limit and a depth limit and
 // refuses hostile text anywhere in it. Every error has the one JSON shape.
 import { NextResponse } from "next/server";
+import { jsonText } from "@/lib/json-text";
 import type { z } from "zod";
 import { sessionFromRequest, type Session } from "@/lib/auth/session";
 import { requireSession } from "@/lib/auth/roles";
@@ -174,20 +175,13 @@ export async function parseJson<S extends z.ZodType>(req: Request, schema: S): P
   return parsed.data;
 }
 
-const jsonOfKept = new WeakMap<object, string>();
-
 /**
  * A JSON answer for an object that may be served many times (the answers
- * db/revision.ts keeps): its text is made once per object, not per request.
- * Same headers as route()'s own JSON answers.
+ * db/revision.ts keeps): its text is made once per object (lib/json-text.ts),
+ * not per request. Same headers as route()'s own JSON answers.
  */
 export function keptJsonResponse(value: object): Response {
-  let text = jsonOfKept.get(value);
-  if (text === undefined) {
-    text = JSON.stringify(value);
-    jsonOfKept.set(value, text);
-  }
-  return new Response(text, { headers: { "content-type": "application/json", "cache-control": "private, no-store" } });
+  return new Response(jsonText(value), { headers: { "content-type": "application/json", "cache-control": "private, no-store" } });
 }
 
 export const created = (body: unknown) => NextResponse.json(body, { status: 201, headers: { "cache-control": "private, no-store" } });
