@@ -1,4 +1,4 @@
-import Link from "next/link";
+import Link from "@/components/ui/intent-link";
 import { Brand } from "./brand";
 import { SignOutButton } from "./sign-out-button";
 

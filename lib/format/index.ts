@@ -55,6 +55,12 @@ type Plural = { one: string; other: string };
 
 export type Formatter = ReturnType<typeof formatter>;
 
+/** Made on first use: an Intl formatter with a time zone costs milliseconds to build, and most pages use a few of them. */
+function once<T>(make: () => T): () => T {
+  let made: T | undefined;
+  return () => (made ??= make());
+}
+
 export function formatter(prefs: FormatPrefs) {
   const { locale, timeZone } = prefs;
   const cache = new Map<string, Intl.NumberFormat>();
@@ -64,13 +70,13 @@ export function formatter(prefs: FormatPrefs) {
     if (!f) cache.set(key, (f = new Intl.NumberFormat(locale, opts)));
     return f;
   };
-  const rules = new Intl.PluralRules(locale);
-  const calendarDate = new Intl.DateTimeFormat(locale, { timeZone: "UTC", day: "numeric", month: "short", year: "numeric" });
-  const calendarMonth = new Intl.DateTimeFormat(locale, { timeZone: "UTC", month: "short", year: "numeric" });
-  const calendarDay = new Intl.DateTimeFormat(locale, { timeZone: "UTC", weekday: "short", day: "numeric", month: "short", year: "numeric" });
-  const instant = new Intl.DateTimeFormat(locale, { timeZone, day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", timeZoneName: "short" });
-  const instantTime = new Intl.DateTimeFormat(locale, { timeZone, hour: "2-digit", minute: "2-digit", timeZoneName: "short" });
-  const instantDate = new Intl.DateTimeFormat(locale, { timeZone, day: "numeric", month: "short", year: "numeric" });
+  const rules = once(() => new Intl.PluralRules(locale));
+  const calendarDate = once(() => new Intl.DateTimeFormat(locale, { timeZone: "UTC", day: "numeric", month: "short", year: "numeric" }));
+  const calendarMonth = once(() => new Intl.DateTimeFormat(locale, { timeZone: "UTC", month: "short", year: "numeric" }));
+  const calendarDay = once(() => new Intl.DateTimeFormat(locale, { timeZone: "UTC", weekday: "short", day: "numeric", month: "short", year: "numeric" }));
+  const instant = once(() => new Intl.DateTimeFormat(locale, { timeZone, day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", timeZoneName: "short" }));
+  const instantTime = once(() => new Intl.DateTimeFormat(locale, { timeZone, hour: "2-digit", minute: "2-digit", timeZoneName: "short" }));
+  const instantDate = once(() => new Intl.DateTimeFormat(locale, { timeZone, day: "numeric", month: "short", year: "numeric" }));
   const toDate = (x: Date | string | number) => (x instanceof Date ? x : new Date(x));
   const plainDate = (iso: string) => {
     const [y, m, d] = iso.slice(0, 10).split("-").map(Number);
@@ -81,16 +87,16 @@ export function formatter(prefs: FormatPrefs) {
   const f = {
     prefs,
     /** A calendar date, `YYYY-MM-DD`, as the viewer writes dates ("5 Mar 2026", "5. März 2026"). */
-    date: (iso: string | null | undefined) => (iso ? calendarDate.format(plainDate(iso)) : "—"),
+    date: (iso: string | null | undefined) => (iso ? calendarDate().format(plainDate(iso)) : "—"),
     /** The month of a calendar date ("Mar 2026"), for chart axes. */
-    monthYear: (iso: string) => calendarMonth.format(plainDate(iso)),
+    monthYear: (iso: string) => calendarMonth().format(plainDate(iso)),
     /** A calendar date with its weekday. */
-    day: (iso: string | null | undefined) => (iso ? calendarDay.format(plainDate(iso)) : "—"),
+    day: (iso: string | null | undefined) => (iso ? calendarDay().format(plainDate(iso)) : "—"),
     /** A moment in time, in the viewer's zone, with the zone's name. */
-    dateTime: (at: Date | string | number | null | undefined) => (at == null ? "—" : instant.format(toDate(at))),
-    time: (at: Date | string | number) => instantTime.format(toDate(at)),
+    dateTime: (at: Date | string | number | null | undefined) => (at == null ? "—" : instant().format(toDate(at))),
+    time: (at: Date | string | number) => instantTime().format(toDate(at)),
     /** The calendar day of a moment, in the viewer's zone. */
-    dateOf: (at: Date | string | number) => instantDate.format(toDate(at)),
+    dateOf: (at: Date | string | number) => instantDate().format(toDate(at)),
     number: (n: number, digits = 0) => nf({ maximumFractionDigits: digits }).format(n),
     money: (cents: number | null | undefined, currency = "EUR") => {
       if (cents == null) return "—";
@@ -101,8 +107,8 @@ export function formatter(prefs: FormatPrefs) {
       }
     },
     /** "1 row", "2 rows": the word chosen by Intl.PluralRules for the viewer's locale. */
-    count: (n: number, words: Plural) => `${nf({}).format(n)} ${rules.select(n) === "one" ? words.one : words.other}`,
-    plural: (n: number, words: Plural) => (rules.select(n) === "one" ? words.one : words.other),
+    count: (n: number, words: Plural) => `${nf({}).format(n)} ${rules().select(n) === "one" ? words.one : words.other}`,
+    plural: (n: number, words: Plural) => (rules().select(n) === "one" ? words.one : words.other),
     depth: (mm: number | null | undefined, u: DepthUnit) => {
       if (mm == null || !Number.isFinite(mm)) return "—";
       return u === "32nds" ? `${nf({ maximumFractionDigits: 1 }).format(mmToThirtySeconds(mm))}/32 in` : nf({ style: "unit", unit: "millimeter", maximumFractionDigits: 1 }).format(mm);
