@@ -16,7 +16,7 @@ import "server-only";
 // answer again on a hit and fails loudly if the two differ: the whole test
 // suite then checks that every write path moves a stamp.
 import { LRUCache } from "lru-cache";
-import { jsonText } from "@/lib/json-text";
+import { jsonBytes } from "@/lib/json-text";
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
 import { driverVehicles } from "@/db/queries/access";
@@ -84,7 +84,7 @@ export async function underStamp<T>(key: string, stamp: string, compute: () => P
   }
   stats.misses += 1;
   const value = await compute();
-  const bytes = jsonText(value).length;
+  const bytes = jsonBytes(value).byteLength;
   // An answer larger than a quarter of the room would push the rest out: not kept.
   if (bytes <= MAX_BYTES / 4) cache.set(key, { stamp, value, bytes });
   return value;

@@ -10,7 +10,7 @@ import "server-only";
 // parseJson() then reads the body with a byte limit and a depth limit and
 // refuses hostile text anywhere in it. Every error has the one JSON shape.
 import { NextResponse } from "next/server";
-import { jsonText } from "@/lib/json-text";
+import { jsonBody } from "@/lib/json-text";
 import type { z } from "zod";
 import { sessionFromRequest, type Session } from "@/lib/auth/session";
 import { requireSession } from "@/lib/auth/roles";
@@ -181,7 +181,7 @@ export async function parseJson<S extends z.ZodType>(req: Request, schema: S): P
  * not per request. Same headers as route()'s own JSON answers.
  */
 export function keptJsonResponse(value: object): Response {
-  return new Response(jsonText(value), { headers: { "content-type": "application/json", "cache-control": "private, no-store" } });
+  return new Response(jsonBody(value), { headers: { "content-type": "application/json", "cache-control": "private, no-store" } });
 }
 
 export const created = (body: unknown) => NextResponse.json(body, { status: 201, headers: { "cache-control": "private, no-store" } });
