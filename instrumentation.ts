@@ -1,24 +1,9 @@
-// Runs once when the server starts: refuse an unsafe configuration, stamp
-// requests with their peer address, apply migrations before any request.
+// Runs once when the server starts. The work is Node.js-only and lives in
+// lib/server-start.ts, imported under the NEXT_RUNTIME test Next.js replaces
+// at build time, so the Edge build of this file never sees it.
 export async function register() {
-  if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  if (process.env.NEXT_PHASE === "phase-production-build") return;
-  const { installPeerStamp } = await import("./lib/peer");
-  installPeerStamp();
-  try {
-    const { assertFakesConfigured } = await import("./lib/dev-fakes");
-    assertFakesConfigured([
-      { name: "e-mail", realKeyVar: "RESEND_API_KEY" },
-      { name: "payments", realKeyVar: "STRIPE_SECRET_KEY" },
-    ]);
-    const { migrateDb } = await import("./db");
-    await migrateDb();
-  } catch (err) {
-    // A server that cannot serve safely (a fake left reachable, a data folder
-    // held by another process) stops with the reason instead of answering 500s.
-    console.error(`\n${err instanceof Error ? err.message : String(err)}\n`);
-    process.exit(1);
+  if (process.env.NEXT_RUNTIME === "nodejs") {
+    const { startServer } = await import("./lib/server-start");
+    await startServer();
   }
-  const { startScheduler } = await import("./lib/scheduler");
-  startScheduler();
 }
