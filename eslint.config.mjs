@@ -7,7 +7,6 @@ const lazyPaths = [
   { name: "zod", allowTypeImports: true, message: "Only types from zod in components; schemas load through lazyZodResolver." },
   { name: "sonner", importNames: ["toast"], allowTypeImports: true, message: "Raise toasts through @/components/ui/toast (the library loads with the toast area)." },
 ];
-const intentLink = { name: "next/link", allowTypeImports: true, message: "Use Link from @/components/ui/intent-link (fetches the page ahead on intent, not on sight)." };
 
 const config = [
   ...nextVitals,
@@ -27,14 +26,8 @@ const config = [
   // Forms check with zod through lib/forms/lazy-zod-resolver.ts, which loads the
   // resolver and the schema on the first check: imported directly, they put
   // zod on the page's first load (DEVELOPERS.md, "Page weight"). Likewise toasts.
-  // Links fetch their page ahead on intent only (components/ui/intent-link.tsx).
   {
     files: ["components/**/*.{ts,tsx}", "app/**/*.tsx"],
-    rules: { "no-restricted-imports": ["error", { paths: [...lazyPaths, intentLink] }] },
-  },
-  // The one wrapper of next/link, and the local fakes' pages (development only).
-  {
-    files: ["components/ui/intent-link.tsx", "app/dev/**/*.tsx"],
     rules: { "no-restricted-imports": ["error", { paths: lazyPaths }] },
   },
 ];

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { Brand } from "@/components/shell/brand";
 import { buttonVariants } from "@/components/ui/button-variants";
 

@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import type { ReactNode } from "react";
 import { Brand } from "@/components/shell/brand";
 import { buttonVariants } from "@/components/ui/button-variants";

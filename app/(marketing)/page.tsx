@@ -1,6 +1,6 @@
 import { CalendarDays, Gauge, KeyRound, ScanLine } from "lucide-react";
 import { Alert } from "@/components/ui/alert";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { SafetyNote } from "@/components/ui/safety-note";

@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { linkClass } from "@/components/logbook/format";
 import { viewerFormat } from "@/lib/format/server";
 import { listSnapshots } from "@/db/queries/hand-on";

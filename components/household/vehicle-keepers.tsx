@@ -4,7 +4,7 @@
 // neither is in the page's own data.
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { Send, UserPlus } from "lucide-react";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { toast } from "@/components/ui/toast";

@@ -6,7 +6,7 @@
 // (vehicle-keepers.tsx): nothing of them is in the page's first load.
 import { FileDown, Printer } from "lucide-react";
 import dynamic from "next/dynamic";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { buttonVariants } from "@/components/ui/button-variants";
 
 const HandOnLink = dynamic(() => import("./vehicle-keepers").then((m) => m.HandOnLink), { ssr: false });

@@ -4,7 +4,7 @@
 import type { SetKind } from "@/lib/tires";
 import { useQuery } from "@tanstack/react-query";
 import { QueryIsland } from "./query-island";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Alert } from "@/components/ui/alert";

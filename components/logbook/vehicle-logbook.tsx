@@ -6,7 +6,7 @@ import { VehicleSharing } from "@/components/household/vehicle-sharing";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { QueryIsland } from "./query-island";
 import { FileText, Image as ImageIcon } from "lucide-react";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { useCallback, useMemo, useRef, useState } from "react";
 import { toast } from "@/components/ui/toast";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";

@@ -1,5 +1,5 @@
 import { TimerOff } from "lucide-react";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { buttonVariants } from "@/components/ui/button-variants";
 
 /** What the technician sees instead of the logbook once the pass has ended. */

@@ -1,7 +1,7 @@
 // The tire history laid out for paper. On screen it is a narrow page with
 // its controls; printed, the app's frame and the controls disappear and the
 // page fits A4 and US Letter (the paper choice sets @page).
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import type { PrintableHistory } from "@/lib/print/history";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { ConditionBadge } from "@/components/ui/condition-badge";

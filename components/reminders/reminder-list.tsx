@@ -2,7 +2,7 @@
 // The coming reminders in date order, each with its reason and a word for
 // how pressing it is (never colour alone).
 import { CalendarDays } from "lucide-react";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { ConditionBadge } from "@/components/ui/condition-badge";
 import { useFormat } from "@/components/format/format-provider";
 import { logbookPath, whatToDo } from "@/lib/reminders/describe";

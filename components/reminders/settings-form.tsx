@@ -1,7 +1,7 @@
 "use client";
 // Reminder settings: the same zod schema checks the form here and the
 // server action there. Plus-only choices stay visible but switched off on Free.
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";

@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { MARK_ON_LIGHT, MARK_PATCHES, MARK_RADIUS, MARK_VIEWBOX, markGrooves, markTurn } from "@/lib/visual/mark";
 
 /** The mark: the four contact patches a car stands on, seen from underneath, the front pair steering (lib/visual/mark.ts). */

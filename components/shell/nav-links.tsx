@@ -1,5 +1,5 @@
 "use client";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { cn } from "@/lib/cn";
 

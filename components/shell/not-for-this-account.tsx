@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { Brand } from "./brand";
 import { SignOutButton } from "./sign-out-button";
 

@@ -1,6 +1,6 @@
 "use client";
 import { linkClass } from "@/components/logbook/format";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { useForm, type FieldValues, type Path } from "react-hook-form";

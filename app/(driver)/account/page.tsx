@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { AccountData } from "@/components/account/account-data";

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { viewerFormat } from "@/lib/format/server";
 import { AccessLogTable } from "@/components/passes/access-log-table";
 import { IssuePassForm } from "@/components/passes/issue-pass-form";

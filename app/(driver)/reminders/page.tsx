@@ -1,5 +1,5 @@
 import { Check } from "lucide-react";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { redirect } from "next/navigation";
 import { FeedPanel } from "@/components/reminders/feed-panel";
 import { ReminderList } from "@/components/reminders/reminder-list";

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { CalendarClock, Gauge, Plus, Warehouse } from "lucide-react";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { redirect } from "next/navigation";
 import { linkClass, setTitle } from "@/components/logbook/format";
 import { viewerFormat } from "@/lib/format/server";

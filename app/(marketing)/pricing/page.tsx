@@ -1,6 +1,6 @@
 import { Check } from "lucide-react";
 import type { Metadata } from "next";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { BuyPlus } from "@/components/billing/buy-plus";
 import { buttonVariants } from "@/components/ui/button-variants";
 import { getSession } from "@/lib/auth/session";

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { ChevronRight } from "lucide-react";
 import { viewerFormat } from "@/lib/format/server";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { PassStateBadge } from "@/components/passes/pass-state-badge";
 import { TimeLeft } from "@/components/passes/time-left";
 import { Card } from "@/components/ui/card";

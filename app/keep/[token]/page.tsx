@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { Brand } from "@/components/shell/brand";
 import { AcceptLink } from "@/components/ui/accept-link";
 import { Alert } from "@/components/ui/alert";

@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { AcceptLink } from "@/components/ui/accept-link";
 import { HandOnSummaryView } from "@/components/household/hand-on-summary";
 import { Brand } from "@/components/shell/brand";

@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { buttonVariants } from "@/components/ui/button-variants";
 
 /** Forward paging by cursor; "first page" goes back to the start. */

@@ -1,4 +1,4 @@
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { AwaitingConfirmation } from "@/components/billing/awaiting-confirmation";

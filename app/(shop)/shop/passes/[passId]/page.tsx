@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
 import { TimeLeft } from "@/components/passes/time-left";

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { Paperclip, PencilLine } from "lucide-react";
-import Link from "@/components/ui/intent-link";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PassClosed } from "@/components/passes/pass-closed";
 import { PassEntryControls } from "@/components/passes/pass-entry-controls";
