@@ -6,12 +6,12 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 export PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD=1
 
+started=$(date +%s)
 LOG=$(mktemp)
 trap 'rm -f "$LOG"' EXIT
-step() { printf '\n\033[1m== %s ==\033[0m\n' "$1"; }
+step() { printf '\n\033[1m== %s ==\033[0m (at %d s)\n' "$1" "$(( $(date +%s) - started ))"; }
 # Runs a step, keeping its output for the count at the end.
 run() { "$@" 2>&1 | tee -a "$LOG"; }
-started=$(date +%s)
 
 step "lint"
 npx eslint .
