@@ -8,7 +8,7 @@ import path from "node:path";
 import sharp from "sharp";
 import { describe, expect, it } from "vitest";
 import manifest from "@/app/manifest";
-import { MARK_ICON, MARK_PATCHES, markSvg } from "@/lib/visual/mark";
+import { MARK_ICON, MARK_ON_LIGHT, MARK_PATCHES, markSvg } from "@/lib/visual/mark";
 
 const root = path.join(import.meta.dirname, "../../..");
 
@@ -27,6 +27,10 @@ describe("the mark", () => {
 
   it("matches the committed favicon SVG (run scripts/make-icons.ts after changing the mark)", () => {
     expect(readFileSync(path.join(root, "app/icon.svg"), "utf8").trim()).toBe(markSvg(MARK_ICON, { size: 32, safe: 0.86 }));
+  });
+
+  it("matches the committed light-ground SVG the error page shows (public/icons/mark.svg)", () => {
+    expect(readFileSync(path.join(root, "public/icons/mark.svg"), "utf8").trim()).toBe(markSvg(MARK_ON_LIGHT));
   });
 });
 
