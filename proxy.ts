@@ -1,6 +1,7 @@
-// Runs before every page and route: security headers with a fresh CSP nonce
-// (Next reads the nonce from the request's CSP header and puts it on its own
-// scripts), and a clean 403 for a server action posted from another origin.
+// Runs before every page (not the API: see the matcher): security headers
+// with a fresh CSP nonce (Next reads the nonce from the request's CSP header
+// and puts it on its own scripts), and a clean 403 for a server action posted
+// from another origin.
 import { NextResponse, type NextRequest } from "next/server";
 import { isForeignServerAction, newNonce, securityHeaders } from "@/lib/security-headers";
 
@@ -23,6 +24,7 @@ export function proxy(req: NextRequest) {
 }
 
 export const config = {
-  // Static build files carry the same fixed headers from next.config.mjs.
-  matcher: ["/((?!_next/static|_next/image).*)"],
+  // Static build files and API answers (JSON, files and feeds: no page, no
+  // script) carry fixed headers from next.config.mjs instead.
+  matcher: ["/((?!_next/static|_next/image|api/).*)"],
 };

@@ -27,6 +27,14 @@ test.describe("security of the running server", () => {
     expect(res.status()).toBe(401);
     expect(res.headers()["x-content-type-options"]).toBe("nosniff");
     expect(res.headers()["cache-control"]).toContain("no-store");
+    // API answers skip proxy.ts and get a CSP that allows nothing from next.config.mjs.
+    for (const path of ["/api/vehicles", "/api/auth/ok", "/api/feed/not-a-token.ics"]) {
+      const h = (await request.get(path)).headers();
+      expect(h["content-security-policy"], path).toContain("default-src 'none'");
+      expect(h["content-security-policy"], path).toContain("frame-ancestors 'none'");
+      expect(h["x-frame-options"], path).toBe("DENY");
+      expect(h["x-content-type-options"], path).toBe("nosniff");
+    }
   });
 
   test("a server action posted from another origin is a 403, not a 500", async ({ request }) => {
