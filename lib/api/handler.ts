@@ -129,7 +129,7 @@ export function route<P extends Params = Params>(fn: (args: HandlerArgs<P>) => P
 }
 
 /** Reads a request body as bytes, refusing more than `maxBytes` without buffering the rest. */
-export async function readBodyLimited(req: Request, maxBytes: number, tooLarge: () => AppError): Promise<Uint8Array> {
+export async function readBodyLimited(req: Request, maxBytes: number, tooLarge: () => AppError, field = "_form"): Promise<Uint8Array> {
   const declared = Number(req.headers.get("content-length") ?? "NaN");
   if (Number.isFinite(declared) && declared > maxBytes) throw tooLarge();
   if (!req.body) return new Uint8Array(0);
@@ -137,7 +137,15 @@ export async function readBodyLimited(req: Request, maxBytes: number, tooLarge: 
   const chunks: Uint8Array[] = [];
   let total = 0;
   for (;;) {
-    const { done, value } = await reader.read();
+    let next: ReadableStreamReadResult<Uint8Array>;
+    try {
+      next = await reader.read();
+    } catch {
+      // The client went away (or its connection broke) mid-body: a 4xx, not a
+      // logged 500, and nothing was written since nothing had been read whole.
+      throw new AppError("invalid", "The request ended before its body arrived whole. Nothing was saved; send it again.", { [field]: ["The body was cut off."] });
+    }
+    const { done, value } = next;
     if (done) break;
     total += value.byteLength;
     if (total > maxBytes) {

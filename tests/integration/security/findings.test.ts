@@ -2,7 +2,7 @@
 // on the code as it was before the fix. They call the real route handlers
 // on a fresh database and compare row counts around every refusal.
 import { count, eq } from "drizzle-orm";
-import { afterEach, beforeAll, describe, expect, it } from "vitest";
+import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
 import { accessLog, attachment, fakeOutbox, member, organization, shopPass, treadCheck, vehicle } from "@/db/schema";
 import { POST as authPost } from "@/app/api/auth/[...all]/route";
@@ -237,6 +237,38 @@ describe("finding 6: uploads are cut off at the limit while streaming, and count
     expect(res.status).toBe(413);
     expect(sent).toBeLessThanOrEqual(10 * 1024 * 1024 + 64 * 1024 + 2 * chunk.byteLength);
     expect(await rows(attachment)).toBe(before);
+  });
+});
+
+describe("a body that breaks off mid-way (the client went away or its connection broke)", () => {
+  /** Half a body, then the error Node's HTTP server gives a request stream whose client hung up. */
+  function brokenRequest(url: string, contentType: string, half: Uint8Array) {
+    const stream = new ReadableStream<Uint8Array>({
+      start(c) {
+        c.enqueue(half);
+        c.error(Object.assign(new Error("aborted"), { code: "ECONNRESET" }));
+      },
+    });
+    return new Request(new URL(url, "http://fourpatch.test"), { method: "POST", headers: { cookie: ada.cookie, "content-type": contentType }, body: stream, duplex: "half" } as RequestInit);
+  }
+
+  it("is a 4xx naming what was cut off, writes nothing and logs no error (JSON, upload)", async () => {
+    const logged = vi.spyOn(console, "error").mockImplementation(() => {});
+    try {
+      const car = await makeVehicle(ada);
+      const before = { vehicles: await rows(vehicle), files: await rows(attachment) };
+      const json = JSON.stringify(vehicleBody);
+      const res = await vehiclesPost(brokenRequest("/api/vehicles", "application/json", new TextEncoder().encode(json.slice(0, json.length / 2))), ctx({}));
+      expect(res.status).toBe(422);
+      expect(((await res.json()) as { error: { fields: Record<string, string[]> } }).error.fields._form).toEqual(["The body was cut off."]);
+      const up = await upload(brokenRequest(`/api/vehicles/${car.vehicle.id}/attachments`, "multipart/form-data; boundary=xyz", new TextEncoder().encode("--xyz\r\nContent-Disposition: form-data; name=\"file\"")), ctx({ vehicleId: car.vehicle.id }));
+      expect(up.status).toBe(422);
+      expect(((await up.json()) as { error: { fields: Record<string, string[]> } }).error.fields.file).toEqual(["The body was cut off."]);
+      expect({ vehicles: await rows(vehicle), files: await rows(attachment) }).toEqual(before);
+      expect(logged).not.toHaveBeenCalled();
+    } finally {
+      logged.mockRestore();
+    }
   });
 });
 

@@ -19,7 +19,7 @@ export const POST = route<{ vehicleId: string }>(
   async ({ req, params, session }) => {
     const access = ownerAccess(session!);
     await assertVehicleAccess(access, { vehicleId: params.vehicleId, action: "upload" });
-    const bytes = await readBodyLimited(req, ATTACHMENT_MAX_BYTES + ENVELOPE_BYTES, tooLarge);
+    const bytes = await readBodyLimited(req, ATTACHMENT_MAX_BYTES + ENVELOPE_BYTES, tooLarge, "file");
     let form: FormData;
     try {
       form = await new Response(bytes as BodyInit, { headers: { "content-type": req.headers.get("content-type") ?? "" } }).formData();
