@@ -9,7 +9,7 @@
 // shapes draw the lines and markers, and React draws the SVG with the page: a
 // chart library that renders for itself cost ~110 KiB of script and a quarter
 // of a second of a phone's main thread, for a few lines.
-import { useEffect, useRef, useState } from "react";
+import { useLayoutEffect, useRef, useState } from "react";
 import { scaleLinear, scaleUtc } from "d3-scale";
 import { line, symbol, symbolCircle, symbolCross, symbolDiamond, symbolSquare, symbolTriangle } from "d3-shape";
 import type { TireView } from "@/db/queries/logbook-view";
@@ -85,18 +85,20 @@ export function WearPlot({ tires, limitMm, depthUnit, distanceUnit, axis }: { ti
 
 /**
  * The drawing takes its box's size in CSS pixels, so its text keeps its size on
- * a phone and on a wide screen. The server draws it for a phone-sized box;
- * in the browser it is drawn again at the box's own size.
+ * a phone and on a wide screen. The plot is drawn in the browser only (it
+ * loads after the page), so it waits for the box's size and draws once: a
+ * first drawing at a guessed size, redrawn at the measured one, was twice the
+ * work of a phone's main thread at the page's start.
  */
 function MeasuredPlot({ scene }: { scene: Scene }) {
   const box = useRef<HTMLDivElement>(null);
-  const [size, setSize] = useState({ width: 400, height: 288 });
-  useEffect(() => {
+  const [size, setSize] = useState<{ width: number; height: number } | null>(null);
+  useLayoutEffect(() => {
     const el = box.current;
     if (!el) return;
     const measure = () => {
       const r = el.getBoundingClientRect();
-      if (r.width > 0 && r.height > 0) setSize((s) => (Math.abs(s.width - r.width) < 1 && Math.abs(s.height - r.height) < 1 ? s : { width: Math.round(r.width), height: Math.round(r.height) }));
+      if (r.width > 0 && r.height > 0) setSize((s) => (s && Math.abs(s.width - r.width) < 1 && Math.abs(s.height - r.height) < 1 ? s : { width: Math.round(r.width), height: Math.round(r.height) }));
     };
     measure();
     const o = new ResizeObserver(measure);
@@ -105,7 +107,7 @@ function MeasuredPlot({ scene }: { scene: Scene }) {
   }, []);
   return (
     <div ref={box} className="h-full w-full">
-      <Plot scene={scene} width={size.width} height={size.height} className="h-full w-full" />
+      {size ? <Plot scene={scene} width={size.width} height={size.height} className="h-full w-full" /> : null}
     </div>
   );
 }
