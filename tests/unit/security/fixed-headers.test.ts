@@ -3,8 +3,12 @@
 // places: the values both set must stay the same, and the API's CSP must
 // allow nothing a page's CSP allows.
 import { describe, expect, it } from "vitest";
-import nextConfig from "@/next.config.mjs";
+import type { NextConfig } from "next";
+// @ts-expect-error -- next.config.mjs is plain JavaScript, without declarations
+import rawConfig from "@/next.config.mjs";
 import { securityHeaders } from "@/lib/security-headers";
+
+const nextConfig = rawConfig as NextConfig;
 
 async function fixed(source: string): Promise<Record<string, string>> {
   const rules = (await nextConfig.headers?.()) ?? [];
